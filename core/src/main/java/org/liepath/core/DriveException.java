@@ -1,0 +1,36 @@
+package org.liepath.core;
+
+/**
+ * Thrown when a user-supplied {@link Drive} throws or returns a non-finite value while a Hamiltonian is evaluated.
+ * The message names the drive, its term index and the time; the original exception, if any, is the cause.
+ *
+ * <p>Integrators turn this into a non-success status rather than letting it escape a run. Immutable.
+ */
+public class DriveException extends IllegalStateException {
+    private static final long serialVersionUID = 1L;
+    private final int term;
+    private final double time;
+    private final String driveName;
+
+    public DriveException(String driveName, int term, double time, String what, Throwable cause) {
+        super("drive '" + driveName + "' of term " + term + " " + what + " at t = " + time, cause);
+        this.term = term;
+        this.time = time;
+        this.driveName = driveName;
+    }
+
+    /** @return the index of the Hamiltonian term whose drive failed */
+    public int term() {
+        return term;
+    }
+
+    /** @return the time at which it failed */
+    public double time() {
+        return time;
+    }
+
+    /** @return the drive's name */
+    public String driveName() {
+        return driveName;
+    }
+}

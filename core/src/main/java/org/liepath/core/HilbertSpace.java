@@ -1,0 +1,127 @@
+package org.liepath.core;
+
+import org.liepath.core.InvalidInputException.Reason;
+import org.liepath.core.internal.Require;
+
+import java.util.Arrays;
+
+/**
+ * A composite Hilbert space C^{d_0} ⊗ C^{d_1} ⊗ … with subsystem 0 the leftmost (slowest-varying) Kronecker factor,
+ * the same order as Pauli strings.
+ *
+ * <p>Immutable and thread-safe. The total dimension is limited to {@value #MAX_DIM}.
+ */
+public final class HilbertSpace {
+    /** Largest total dimension accepted for dense operators. */
+    public static final int MAX_DIM = 4096;
+
+    private final int[] dims;
+    private final int total;
+
+    private HilbertSpace(int[] dims, int total) {
+        this.dims = dims;
+        this.total = total;
+    }
+
+    /** @param dims the subsystem dimensions, each ≥ 1, product ≤ {@value #MAX_DIM} */
+    public static HilbertSpace of(int... dims) {
+        Require.nonNull(dims, "dims");
+        if (dims.length == 0) {
+            throw InvalidInputException.of(Reason.EMPTY, "dims", "at least one subsystem dimension", "none");
+        }
+        long t = 1;
+        for (int k = 0; k < dims.length; k++) {
+            if (dims[k] < 1) {
+                throw InvalidInputException.of(Reason.OUT_OF_RANGE, "dims", "positive dimensions",
+                        dims[k] + " at position " + k);
+            }
+            t *= dims[k];
+            if (t > MAX_DIM) {
+                throw InvalidInputException.of(Reason.LIMIT_EXCEEDED, "dims", "a total dimension ≤ " + MAX_DIM,
+                        Arrays.toString(dims));
+            }
+        }
+        return new HilbertSpace(dims.clone(), (int) t);
+    }
+
+    /** @return the total dimension Π d_k */
+    public int dim() {
+        return total;
+    }
+
+    /** @return the number of subsystems */
+    public int size() {
+        return dims.length;
+    }
+
+    /** @return the dimension of subsystem k */
+    public int dim(int k) {
+        return dims[Require.index(k, dims.length, "k")];
+    }
+
+    /** @return I ⊗ … ⊗ op (at position k) ⊗ … ⊗ I */
+    public Operator embed(Operator op, int k) {
+        Require.nonNull(op, "op");
+        Require.index(k, dims.length, "k");
+        Require.sameDim(dims[k], op.dim(), "op");
+        Operator out = null;
+        for (int s = 0; s < dims.length; s++) {
+            Operator f = s == k ? op : Operator.identity(dims[s]);
+            out = out == null ? f : out.kron(f);
+        }
+        return out;
+    }
+
+    /** @return a ⊗ b acting on subsystems i and j (i ≠ j), identity elsewhere */
+    public Operator embed(Operator a, int i, Operator b, int j) {
+        Require.nonNull(a, "a");
+        Require.nonNull(b, "b");
+        Require.index(i, dims.length, "i");
+        Require.index(j, dims.length, "j");
+        if (i == j) {
+            throw InvalidInputException.of(Reason.OUT_OF_RANGE, "j", "a subsystem different from i = " + i, j);
+        }
+        Require.sameDim(dims[i], a.dim(), "a");
+        Require.sameDim(dims[j], b.dim(), "b");
+        Operator out = null;
+        for (int s = 0; s < dims.length; s++) {
+            Operator f = s == i ? a : s == j ? b : Operator.identity(dims[s]);
+            out = out == null ? f : out.kron(f);
+        }
+        return out;
+    }
+
+    /** @return the Kronecker product of one operator per subsystem, in order */
+    public Operator product(Operator... ops) {
+        Require.nonNull(ops, "ops");
+        if (ops.length != dims.length) {
+            throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "ops", dims.length + " operators", ops.length);
+        }
+        Operator out = null;
+        for (int s = 0; s < ops.length; s++) {
+            Require.nonNull(ops[s], "ops[" + s + "]");
+            Require.sameDim(dims[s], ops[s].dim(), "ops[" + s + "]");
+            out = out == null ? ops[s] : out.kron(ops[s]);
+        }
+        return out;
+    }
+
+    /** @return the product basis vector |k_0 k_1 …⟩ */
+    public StateVector basis(int... levels) {
+        Require.nonNull(levels, "levels");
+        if (levels.length != dims.length) {
+            throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "levels", dims.length + " levels", levels.length);
+        }
+        int idx = 0;
+        for (int s = 0; s < dims.length; s++) {
+            Require.index(levels[s], dims[s], "levels[" + s + "]");
+            idx = idx * dims[s] + levels[s];
+        }
+        return StateVector.basis(total, idx);
+    }
+
+    @Override
+    public String toString() {
+        return "HilbertSpace" + Arrays.toString(dims) + " (dimension " + total + ")";
+    }
+}

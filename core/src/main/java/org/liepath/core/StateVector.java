@@ -1,0 +1,199 @@
+package org.liepath.core;
+
+import org.apache.commons.math3.complex.Complex;
+import org.liepath.core.InvalidInputException.Reason;
+import org.liepath.core.internal.Dense;
+import org.liepath.core.internal.Require;
+
+import java.util.Arrays;
+import java.util.Locale;
+
+/**
+ * An immutable complex column vector: a (not necessarily normalised) pure state |ψ⟩ in C^n.
+ *
+ * <p>Factories copy their arguments and refuse non-finite entries. Basis index k follows the conventions of the
+ * operator that acts on it (index 0 is spin up for spin ½, the ground level for a d-level system, the leftmost qubit
+ * is the most significant bit of a multi-qubit index).
+ *
+ * <p>Thread-safety: immutable, safe to share.
+ */
+public final class StateVector {
+    final double[] re;
+    final double[] im;
+
+    StateVector(double[] re, double[] im) {
+        this.re = re;
+        this.im = im;
+    }
+
+    /** The basis vector |k⟩ of C^n. */
+    public static StateVector basis(int n, int k) {
+        Require.positive(n, "n");
+        Require.index(k, n, "k");
+        double[] r = new double[n];
+        r[k] = 1;
+        return new StateVector(r, new double[n]);
+    }
+
+    /** A vector from its real and imaginary parts (copied, equal lengths, finite). */
+    public static StateVector of(double[] re, double[] im) {
+        Require.nonNull(re, "re");
+        Require.nonNull(im, "im");
+        if (re.length == 0) {
+            throw InvalidInputException.of(Reason.EMPTY, "re", "at least one component", "length 0");
+        }
+        if (im.length != re.length) {
+            throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "im", "length " + re.length, "length " + im.length);
+        }
+        Require.finite(re, "re");
+        Require.finite(im, "im");
+        return new StateVector(re.clone(), im.clone());
+    }
+
+    /** A real vector. */
+    public static StateVector real(double... re) {
+        Require.nonNull(re, "re");
+        return of(re, new double[re.length]);
+    }
+
+    /** @return the dimension */
+    public int dim() {
+        return re.length;
+    }
+
+    /** @return Re ψ_i */
+    public double re(int i) {
+        return re[Require.index(i, re.length, "i")];
+    }
+
+    /** @return Im ψ_i */
+    public double im(int i) {
+        return im[Require.index(i, re.length, "i")];
+    }
+
+    /** @return ψ_i */
+    public Complex get(int i) {
+        Require.index(i, re.length, "i");
+        return new Complex(re[i], im[i]);
+    }
+
+    /** @return |ψ_i|² */
+    public double probability(int i) {
+        Require.index(i, re.length, "i");
+        return re[i] * re[i] + im[i] * im[i];
+    }
+
+    /** Copies the components into the caller's arrays (length ≥ n). */
+    public void copyTo(double[] reOut, double[] imOut) {
+        Require.nonNull(reOut, "reOut");
+        Require.nonNull(imOut, "imOut");
+        System.arraycopy(re, 0, reOut, 0, re.length);
+        System.arraycopy(im, 0, imOut, 0, im.length);
+    }
+
+    /** @return the Euclidean norm */
+    public double norm() {
+        return Dense.frobenius(re.length, re, im);
+    }
+
+    /** @return this vector divided by its norm */
+    public StateVector normalized() {
+        double s = norm();
+        if (s == 0) {
+            throw InvalidInputException.of(Reason.OUT_OF_RANGE, "this", "a non-zero vector", "the zero vector");
+        }
+        return scale(1 / s);
+    }
+
+    /** @return s·ψ */
+    public StateVector scale(double s) {
+        Require.finite(s, "s");
+        double[] r = new double[re.length], i = new double[re.length];
+        for (int k = 0; k < re.length; k++) {
+            r[k] = s * re[k];
+            i[k] = s * im[k];
+        }
+        return new StateVector(r, i);
+    }
+
+    /** @return ψ + φ */
+    public StateVector plus(StateVector b) {
+        Require.nonNull(b, "b");
+        Require.sameDim(dim(), b.dim(), "b");
+        double[] r = new double[re.length], i = new double[re.length];
+        for (int k = 0; k < re.length; k++) {
+            r[k] = re[k] + b.re[k];
+            i[k] = im[k] + b.im[k];
+        }
+        return new StateVector(r, i);
+    }
+
+    /** @return the inner product ⟨this|b⟩ (conjugate-linear in this) */
+    public Complex inner(StateVector b) {
+        Require.nonNull(b, "b");
+        Require.sameDim(dim(), b.dim(), "b");
+        double r = 0, i = 0;
+        for (int k = 0; k < re.length; k++) {
+            r += re[k] * b.re[k] + im[k] * b.im[k];
+            i += re[k] * b.im[k] - im[k] * b.re[k];
+        }
+        return new Complex(r, i);
+    }
+
+    /** @return ⟨ψ|A|ψ⟩ */
+    public Complex expectation(Operator a) {
+        return inner(apply(a));
+    }
+
+    /** @return A|ψ⟩ */
+    public StateVector apply(Operator a) {
+        Require.nonNull(a, "a");
+        Require.sameDim(dim(), a.n, "a");
+        double[] r = new double[re.length], i = new double[re.length];
+        Dense.mulVec(a.n, a.re, a.im, re, im, r, i);
+        return new StateVector(r, i);
+    }
+
+    /** @return the density matrix |ψ⟩⟨ψ| */
+    public Operator toDensity() {
+        return Operator.outer(this, this);
+    }
+
+    /** @return the Euclidean distance ‖ψ − φ‖ */
+    public double distance(StateVector b) {
+        Require.nonNull(b, "b");
+        Require.sameDim(dim(), b.dim(), "b");
+        double s = 0;
+        for (int k = 0; k < re.length; k++) {
+            double dr = re[k] - b.re[k], di = im[k] - b.im[k];
+            s += dr * dr + di * di;
+        }
+        return Math.sqrt(s);
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof StateVector && Arrays.equals(re, ((StateVector) o).re) && Arrays.equals(im, ((StateVector) o).im);
+    }
+
+    @Override
+    public int hashCode() {
+        return 31 * Arrays.hashCode(re) + Arrays.hashCode(im);
+    }
+
+    @Override
+    public String toString() {
+        StringBuilder sb = new StringBuilder("StateVector ").append(re.length).append(" [");
+        int shown = Math.min(re.length, 16);
+        for (int k = 0; k < shown; k++) {
+            if (k > 0) {
+                sb.append(", ");
+            }
+            sb.append(Operator.formatEntry(re[k], im[k]));
+        }
+        if (shown < re.length) {
+            sb.append(String.format(Locale.ROOT, ", … (%d more)", re.length - shown));
+        }
+        return sb.append(']').toString();
+    }
+}

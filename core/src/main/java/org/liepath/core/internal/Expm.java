@@ -1,0 +1,212 @@
+package org.liepath.core.internal;
+
+/**
+ * Matrix exponential of a dense complex matrix by scaling and squaring with diagonal Padé approximants.
+ *
+ * <p>Method: N.J. Higham, "The scaling and squaring method for the matrix exponential revisited", SIAM J. Matrix
+ * Anal. Appl. 26(4) (2005) 1179–1193: degree m ∈ {3, 5, 7, 9} is used when ‖A‖₁ ≤ θ_m, otherwise A is scaled by 2^-s
+ * so that ‖2^-s A‖₁ ≤ θ_13, r_13 is evaluated with six products and one LU solve, and the result squared s times.
+ * θ_m and the Padé coefficients b_j = (2m−j)!/((m−j)! j!) are the published double-precision values.
+ *
+ * <p>A workspace object holds every scratch array, so repeated calls at one dimension allocate nothing. Instances are
+ * not thread-safe; use one per thread. Not part of the public API.
+ */
+public final class Expm {
+    static final double[] THETA = {1.495585217958292e-2, 2.539398330063230e-1, 9.504178996162932e-1,
+        2.097847961257068e0, 5.371920351148152e0};
+    static final double[] B3 = {120, 60, 12, 1};
+    static final double[] B5 = {30240, 15120, 3360, 420, 30, 1};
+    static final double[] B7 = {17297280, 8648640, 1995840, 277200, 25200, 1512, 56, 1};
+    static final double[] B9 = {17643225600.0, 8821612800.0, 2075673600, 302702400, 30270240, 2162160, 110880, 3960,
+        90, 1};
+    static final double[] B13 = {64764752532480000.0, 32382376266240000.0, 7771770303897600.0, 1187353796428800.0,
+        129060195264000.0, 10559470521600.0, 670442572800.0, 33522128640.0, 1323241920.0, 40840800.0, 960960.0,
+        16380.0, 182.0, 1.0};
+
+    private final int n;
+    private final double[] ar, ai, a2r, a2i, a4r, a4i, a6r, a6i, ur, ui, vr, vi, tr, ti, sr, si;
+    private final int[] piv;
+
+    /** Creates a workspace for n×n matrices. */
+    public Expm(int n) {
+        this.n = n;
+        int len = n * n;
+        ar = new double[len]; ai = new double[len];
+        a2r = new double[len]; a2i = new double[len];
+        a4r = new double[len]; a4i = new double[len];
+        a6r = new double[len]; a6i = new double[len];
+        ur = new double[len]; ui = new double[len];
+        vr = new double[len]; vi = new double[len];
+        tr = new double[len]; ti = new double[len];
+        sr = new double[len]; si = new double[len];
+        piv = new int[n];
+    }
+
+    /** @return the dimension this workspace serves */
+    public int dim() {
+        return n;
+    }
+
+    /** Convenience: allocates a workspace and computes exp(A). */
+    public static void exp(int n, double[] inRe, double[] inIm, double[] outRe, double[] outIm) {
+        new Expm(n).compute(inRe, inIm, outRe, outIm);
+    }
+
+    /**
+     * out = exp(scale·A). Inputs are not modified; outputs may alias inputs.
+     */
+    public void compute(double scale, double[] inRe, double[] inIm, double[] outRe, double[] outIm) {
+        int len = n * n;
+        for (int k = 0; k < len; k++) {
+            ar[k] = scale * inRe[k];
+            ai[k] = scale * inIm[k];
+        }
+        run(outRe, outIm);
+    }
+
+    /** out = exp(A). Inputs are not modified; outputs may alias inputs. */
+    public void compute(double[] inRe, double[] inIm, double[] outRe, double[] outIm) {
+        compute(1.0, inRe, inIm, outRe, outIm);
+    }
+
+    private void run(double[] outRe, double[] outIm) {
+        int len = n * n;
+        double norm = Dense.norm1(n, ar, ai);
+        if (norm == 0) {
+            Dense.identity(n, outRe, outIm);
+            return;
+        }
+        if (!Double.isFinite(norm)) {
+            java.util.Arrays.fill(outRe, 0, len, Double.NaN);
+            java.util.Arrays.fill(outIm, 0, len, Double.NaN);
+            return;
+        }
+        Dense.mul(n, ar, ai, ar, ai, a2r, a2i);
+        if (norm <= THETA[0]) {
+            lowDegree(B3, 1, outRe, outIm);
+            return;
+        }
+        if (norm <= THETA[1]) {
+            lowDegree(B5, 2, outRe, outIm);
+            return;
+        }
+        Dense.mul(n, a2r, a2i, a2r, a2i, a4r, a4i);
+        if (norm <= THETA[2]) {
+            Dense.mul(n, a4r, a4i, a2r, a2i, a6r, a6i);
+            lowDegree(B7, 3, outRe, outIm);
+            return;
+        }
+        if (norm <= THETA[3]) {
+            Dense.mul(n, a4r, a4i, a2r, a2i, a6r, a6i);
+            lowDegree(B9, 4, outRe, outIm);
+            return;
+        }
+        // scaling: smallest s >= 0 with norm / 2^s <= theta13, computed exactly via the binary exponent
+        int s = 0;
+        double ratio = norm / THETA[4];
+        if (ratio > 1) {
+            s = Math.getExponent(ratio);
+            if (ratio > Math.scalb(1.0, s)) {
+                s++;
+            }
+        }
+        if (s > 0) {
+            double f = Math.scalb(1.0, -s);
+            for (int k = 0; k < len; k++) {
+                ar[k] *= f;
+                ai[k] *= f;
+            }
+            Dense.mul(n, ar, ai, ar, ai, a2r, a2i);
+            Dense.mul(n, a2r, a2i, a2r, a2i, a4r, a4i);
+        }
+        Dense.mul(n, a4r, a4i, a2r, a2i, a6r, a6i);
+        double[] b = B13;
+        // U = A [A6 (b13 A6 + b11 A4 + b9 A2) + b7 A6 + b5 A4 + b3 A2 + b1 I]
+        for (int k = 0; k < len; k++) {
+            tr[k] = b[13] * a6r[k] + b[11] * a4r[k] + b[9] * a2r[k];
+            ti[k] = b[13] * a6i[k] + b[11] * a4i[k] + b[9] * a2i[k];
+        }
+        Dense.mul(n, a6r, a6i, tr, ti, sr, si);
+        for (int k = 0; k < len; k++) {
+            sr[k] += b[7] * a6r[k] + b[5] * a4r[k] + b[3] * a2r[k];
+            si[k] += b[7] * a6i[k] + b[5] * a4i[k] + b[3] * a2i[k];
+        }
+        for (int i = 0; i < n; i++) {
+            sr[i * n + i] += b[1];
+        }
+        Dense.mul(n, ar, ai, sr, si, ur, ui);
+        // V = A6 (b12 A6 + b10 A4 + b8 A2) + b6 A6 + b4 A4 + b2 A2 + b0 I
+        for (int k = 0; k < len; k++) {
+            tr[k] = b[12] * a6r[k] + b[10] * a4r[k] + b[8] * a2r[k];
+            ti[k] = b[12] * a6i[k] + b[10] * a4i[k] + b[8] * a2i[k];
+        }
+        Dense.mul(n, a6r, a6i, tr, ti, vr, vi);
+        for (int k = 0; k < len; k++) {
+            vr[k] += b[6] * a6r[k] + b[4] * a4r[k] + b[2] * a2r[k];
+            vi[k] += b[6] * a6i[k] + b[4] * a4i[k] + b[2] * a2i[k];
+        }
+        for (int i = 0; i < n; i++) {
+            vr[i * n + i] += b[0];
+        }
+        solve(outRe, outIm);
+        for (int q = 0; q < s; q++) {
+            System.arraycopy(outRe, 0, tr, 0, len);
+            System.arraycopy(outIm, 0, ti, 0, len);
+            Dense.mul(n, tr, ti, tr, ti, outRe, outIm);
+        }
+    }
+
+    /** Padé of degree 2q+1 with coefficients b, using the powers A2 (q>=1), A4 (q>=2), A6 (q>=3), A8 (q=4). */
+    private void lowDegree(double[] b, int q, double[] outRe, double[] outIm) {
+        int len = n * n;
+        // odd part polynomial in A2: sum_{k odd} b_k A^{k-1}; even part V = sum_{k even} b_k A^k
+        java.util.Arrays.fill(sr, 0, len, 0.0);
+        java.util.Arrays.fill(si, 0, len, 0.0);
+        java.util.Arrays.fill(vr, 0, len, 0.0);
+        java.util.Arrays.fill(vi, 0, len, 0.0);
+        for (int i = 0; i < n; i++) {
+            sr[i * n + i] = b[1];
+            vr[i * n + i] = b[0];
+        }
+        addScaled(b[3], b[2], a2r, a2i);
+        if (q >= 2) {
+            addScaled(b[5], b[4], a4r, a4i);
+        }
+        if (q >= 3) {
+            addScaled(b[7], b[6], a6r, a6i);
+        }
+        if (q >= 4) {
+            // A8 = A4 * A4 into (tr, ti)
+            Dense.mul(n, a4r, a4i, a4r, a4i, tr, ti);
+            addScaled(b[9], b[8], tr, ti);
+        }
+        Dense.mul(n, ar, ai, sr, si, ur, ui);
+        solve(outRe, outIm);
+    }
+
+    private void addScaled(double odd, double even, double[] pr, double[] pi) {
+        int len = n * n;
+        for (int k = 0; k < len; k++) {
+            sr[k] += odd * pr[k];
+            si[k] += odd * pi[k];
+            vr[k] += even * pr[k];
+            vi[k] += even * pi[k];
+        }
+    }
+
+    /** out = (V − U)^{-1} (V + U). */
+    private void solve(double[] outRe, double[] outIm) {
+        int len = n * n;
+        for (int k = 0; k < len; k++) {
+            double pr = vr[k] + ur[k], pi = vi[k] + ui[k];
+            tr[k] = vr[k] - ur[k];
+            ti[k] = vi[k] - ui[k];
+            outRe[k] = pr;
+            outIm[k] = pi;
+        }
+        if (!Dense.solveInPlace(n, tr, ti, outRe, outIm, piv)) {
+            java.util.Arrays.fill(outRe, 0, len, Double.NaN);
+            java.util.Arrays.fill(outIm, 0, len, Double.NaN);
+        }
+    }
+}
