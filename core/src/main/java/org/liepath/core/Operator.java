@@ -15,7 +15,8 @@ import java.util.Locale;
  *
  * <p>Storage is planar and row-major (entry (i, j) is {@code re(i,j) + i·im(i,j)}); every operation returns a new
  * operator and never modifies its inputs. Factories copy the caller's arrays. Entries are always finite: factories
- * refuse NaN and infinities with an {@link InvalidInputException}.
+ * refuse NaN and infinities with an {@link InvalidInputException}, and the arithmetic methods throw one (reason
+ * NOT_FINITE) when a result overflows.
  *
  * <p>Cost: {@link #times} and {@link #commutator} are O(n³) (8n³ flops per product), {@link #exp} is about
  * 6 products and one LU solve plus log₂‖A‖₁ squarings, {@link #kron} is O(n²m²). Intended sizes: 1 … a few hundred.
@@ -260,7 +261,7 @@ public final class Operator {
             r[k] = re[k] + b.re[k];
             i[k] = im[k] + b.im[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "b", "sum");
     }
 
     /** @return this − b */
@@ -271,7 +272,7 @@ public final class Operator {
             r[k] = re[k] - b.re[k];
             i[k] = im[k] - b.im[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "b", "difference");
     }
 
     /** @return the matrix product this·b */
@@ -279,7 +280,7 @@ public final class Operator {
         same(b, "b");
         double[] r = new double[n * n], i = new double[n * n];
         Dense.mul(n, re, im, b.re, b.im, r, i);
-        return new Operator(n, r, i);
+        return checked(n, r, i, "b", "product");
     }
 
     /** @return s·this */
@@ -290,7 +291,7 @@ public final class Operator {
             r[k] = s * re[k];
             i[k] = s * im[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "s", "multiple");
     }
 
     /** @return z·this */
@@ -302,7 +303,7 @@ public final class Operator {
             r[k] = zr * re[k] - zi * im[k];
             i[k] = zr * im[k] + zi * re[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "z", "multiple");
     }
 
     /** @return i·this (exact, no rounding) */
@@ -358,7 +359,7 @@ public final class Operator {
             r1[k] -= r2[k];
             i1[k] -= i2[k];
         }
-        return new Operator(n, r1, i1);
+        return checked(n, r1, i1, "b", "commutator");
     }
 
     /** @return the anticommutator {this, b} = this·b + b·this */
@@ -371,7 +372,7 @@ public final class Operator {
             r1[k] += r2[k];
             i1[k] += i2[k];
         }
-        return new Operator(n, r1, i1);
+        return checked(n, r1, i1, "b", "anticommutator");
     }
 
     /** @return the trace */
@@ -465,7 +466,7 @@ public final class Operator {
                 }
             }
         }
-        return new Operator(nm, r, i);
+        return checked(nm, r, i, "b", "Kronecker product");
     }
 
     /**
@@ -621,22 +622,45 @@ public final class Operator {
         if (k < 0) {
             throw InvalidInputException.of(Reason.OUT_OF_RANGE, "k", "a non-negative exponent", k);
         }
-        Operator result = identity(n), base = this;
+        int len = n * n;
+        double[] rr = new double[len], ri = new double[len], br = re.clone(), bi = im.clone();
+        double[] tr = new double[len], ti = new double[len];
+        for (int q = 0; q < n; q++) {
+            rr[q * n + q] = 1;
+        }
         for (int e = k; e > 0; e >>= 1) {
             if ((e & 1) != 0) {
-                result = result.times(base);
+                Dense.mul(n, rr, ri, br, bi, tr, ti);
+                System.arraycopy(tr, 0, rr, 0, len);
+                System.arraycopy(ti, 0, ri, 0, len);
             }
             if (e > 1) {
-                base = base.times(base);
+                Dense.mul(n, br, bi, br, bi, tr, ti);
+                System.arraycopy(tr, 0, br, 0, len);
+                System.arraycopy(ti, 0, bi, 0, len);
             }
         }
-        for (int q = 0; q < n * n; q++) {
-            if (!Double.isFinite(result.re[q]) || !Double.isFinite(result.im[q])) {
+        for (int q = 0; q < len; q++) {
+            if (!Double.isFinite(rr[q]) || !Double.isFinite(ri[q])) {
                 throw InvalidInputException.of(Reason.NOT_FINITE, "k", "a power whose entries are finite",
                         k + " (overflow, ‖A‖₁ = " + norm1() + ")");
             }
         }
-        return result;
+        return new Operator(n, rr, ri);
+    }
+
+    /**
+     * Wraps a result after checking it is finite: finite inputs can still overflow, and the class promises finite
+     * entries (an O(n²) scan, small next to the work that produced the result).
+     */
+    private static Operator checked(int n, double[] r, double[] i, String argument, String what) {
+        for (int k = 0; k < r.length; k++) {
+            if (!Double.isFinite(r[k]) || !Double.isFinite(i[k])) {
+                throw InvalidInputException.of(Reason.NOT_FINITE, argument, "operands whose " + what + " is finite",
+                        "an overflow at entry (" + k / n + ", " + k % n + ")");
+            }
+        }
+        return new Operator(n, r, i);
     }
 
     private static void checkDim(int n, String name) {

@@ -148,6 +148,23 @@ class GklsReferenceTest {
     }
 
     @Test
+    void choiMatrixDeterminesTheMap() {
+        // Choi–Jamiołkowski: the map ↔ J correspondence is a bijection (Choi 1975); ofChoi inverts choi exactly
+        java.util.Random r = new java.util.Random(21);
+        for (int n = 1; n <= 4; n++) {
+            Superoperator s = Superoperator.ofMatrix(org.liepath.testing.Seeds.randomMatrix(r, n * n));
+            assertEquals(s, Superoperator.ofChoi(s.choi()));
+            assertEquals(s.hashCode(), Superoperator.ofChoi(s.choi()).hashCode());
+        }
+        // the identity channel's Choi matrix is the unnormalised projector onto Σ|aa⟩ (entries 1 at (aa, bb))
+        Operator j = Superoperator.identity(2).choi();
+        Operator omega = StateVector.real(1, 0, 0, 1).toDensity();
+        assertEquals(omega, j);
+        assertEquals(Superoperator.identity(2), Superoperator.ofChoi(omega));
+        assertTrue(!Superoperator.identity(2).equals(Superoperator.identity(2).scale(2)));
+    }
+
+    @Test
     void krausOperatorsRoundTripThroughTheChoiMatrix() {
         double g = 0.45;
         Superoperator ch = Superoperator.kraus(amplitudeDampingKraus(g));
