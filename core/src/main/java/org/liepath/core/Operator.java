@@ -399,7 +399,7 @@ public final class Operator {
 
     /** @return the Frobenius (Hilbert–Schmidt) norm sqrt(tr(A†A)) */
     public double norm() {
-        return Dense.frobenius(n * n, re, im);
+        return safeNorm(re, im);
     }
 
     /** @return the matrix 1-norm (maximum column sum of moduli) */
@@ -415,7 +415,15 @@ public final class Operator {
             double dr = re[k] - b.re[k], di = im[k] - b.im[k];
             s += dr * dr + di * di;
         }
-        return Math.sqrt(s);
+        if (inRange(s)) {
+            return Math.sqrt(s);
+        }
+        Ssq q = new Ssq();
+        for (int k = 0; k < n * n; k++) {
+            q.add(0.5 * re[k] - 0.5 * b.re[k]);
+            q.add(0.5 * im[k] - 0.5 * b.im[k]);
+        }
+        return 2 * q.value();
     }
 
     /**
@@ -438,7 +446,17 @@ public final class Operator {
                 s += dr * dr + di * di;
             }
         }
-        return Math.sqrt(s);
+        if (inRange(s)) {
+            return Math.sqrt(s);
+        }
+        Ssq q = new Ssq();
+        for (int a = 0; a < n; a++) {
+            for (int b = 0; b < n; b++) {
+                q.add(0.5 * re[a * n + b] - 0.5 * re[b * n + a]);
+                q.add(0.5 * im[a * n + b] + 0.5 * im[b * n + a]);
+            }
+        }
+        return 2 * q.value();
     }
 
     /** @return the Kronecker product this ⊗ b (this is the left, slower-varying factor) */
@@ -661,6 +679,58 @@ public final class Operator {
             }
         }
         return new Operator(n, r, i);
+    }
+
+    /**
+     * Whether a plain sum of squares can be trusted: finite (no overflow) and large enough that its dominant terms
+     * were normal numbers (entries below ~1e-154 square to subnormals or zero).
+     */
+    static boolean inRange(double sumOfSquares) {
+        // a zero sum may hide non-zero entries whose squares underflowed, so it takes the scaled pass too
+        return sumOfSquares < Double.POSITIVE_INFINITY && sumOfSquares > 1e-290;
+    }
+
+    /**
+     * sqrt(Σ re² + im²) without overflow or underflow: the plain sum when it is in range, else a scaled pass
+     * (the scale-and-sum update of the reference BLAS dnrm2; S. J. Hammarling, 1979 — common practice).
+     */
+    static double safeNorm(double[] re, double[] im) {
+        double s = 0;
+        for (int k = 0; k < re.length; k++) {
+            s += re[k] * re[k] + im[k] * im[k];
+        }
+        if (inRange(s)) {
+            return Math.sqrt(s);
+        }
+        Ssq q = new Ssq();
+        for (int k = 0; k < re.length; k++) {
+            q.add(re[k]);
+            q.add(im[k]);
+        }
+        return q.value();
+    }
+
+    /** Scaled sum of squares: value() = scale·sqrt(sum) = sqrt(Σ x²) for the numbers added. */
+    static final class Ssq {
+        private double scale = 0, sum = 1;
+
+        void add(double x) {
+            if (x != 0) {
+                double a = Math.abs(x);
+                if (scale < a) {
+                    double r = scale / a;
+                    sum = 1 + sum * r * r;
+                    scale = a;
+                } else {
+                    double r = a / scale;
+                    sum += r * r;
+                }
+            }
+        }
+
+        double value() {
+            return scale * Math.sqrt(sum);
+        }
     }
 
     private static void checkDim(int n, String name) {
