@@ -88,15 +88,16 @@ public final class PauliClosure {
         ProgressListener[] l = {listener};
         long[] buf = new long[2 * words];
         long pairs = 0;
+        int[] partners = new int[64];
+        int[] np = new int[1];
         for (int i = 0; i < t.size(); i++) {
-            for (int j = 0; j < i; j++) {
-                if (t.anticommute(i, j)) {
-                    t.product(i, j, buf);
-                    int before = t.size();
-                    t.intern(buf, 0);
-                    if (t.size() > before && t.size() > maxDimension) {
-                        throw limit(maxDimension);
-                    }
+            partners = t.anticommutingWith(i, i, partners, np);
+            for (int e = 0; e < np[0]; e++) {
+                t.product(i, partners[e], buf);
+                int before = t.size();
+                t.intern(buf, 0);
+                if (t.size() > before && t.size() > maxDimension) {
+                    throw limit(maxDimension);
                 }
             }
             pairs += i;

@@ -120,6 +120,33 @@ public final class StringTable {
     }
 
     /**
+     * Collects the indices j in [0, upTo) of entries that anticommute with entry i into {@code out} (grown as
+     * needed; returned) and stores their number in {@code count[0]}. The hot loop of closures and of the
+     * anticommutation graph: one-word strings (up to 64 qubits) take a branch-free path.
+     */
+    public int[] anticommutingWith(int i, int upTo, int[] out, int[] count) {
+        int m = 0;
+        if (out.length < upTo) {
+            out = new int[Math.max(upTo, 2 * out.length)];
+        }
+        if (w == 1) {
+            long xi = data[2 * i], zi = data[2 * i + 1];
+            for (int j = 0; j < upTo; j++) {
+                long xj = data[2 * j], zj = data[2 * j + 1];
+                out[m] = j;
+                m += Long.bitCount((xi & zj) ^ (zi & xj)) & 1;
+            }
+        } else {
+            for (int j = 0; j < upTo; j++) {
+                out[m] = j;
+                m += anticommute(i, j) ? 1 : 0;
+            }
+        }
+        count[0] = m;
+        return out;
+    }
+
+    /**
      * Writes the string part of the product of entries i and j into {@code out[0 .. 2w)} and returns the phase
      * exponent k of P_i P_j = i^k R (see the derivation on PauliString.phase).
      */
