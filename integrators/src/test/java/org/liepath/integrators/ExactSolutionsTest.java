@@ -43,7 +43,18 @@ class ExactSolutionsTest {
         if (c.order() >= 4) {
             return GLOBAL;
         }
-        return Math.max(GLOBAL, 2 * ev.stats().acceptedSteps() * TOL * Math.sqrt(ev.propagator().dim()));
+        // ‖U‖_F = √n in propagator mode, ‖ψ‖ = 1 in state mode
+        double normF = isStateMode(ev) ? 1 : Math.sqrt(ev.propagator().dim());
+        return Math.max(GLOBAL, 2 * ev.stats().acceptedSteps() * TOL * normF);
+    }
+
+    static boolean isStateMode(Evolution ev) {
+        try {
+            ev.state();
+            return true;
+        } catch (IllegalStateException e) {
+            return false;
+        }
     }
 
     /** Runs adaptively and checks the propagator against the exact one within the budget; returns it. */
@@ -82,6 +93,29 @@ class ExactSolutionsTest {
         ReferenceProblems.Problem p = ReferenceProblems.rabi(1, 0.3, 0.9, 10);
         check(c, p.h(), p.t0(), p.t1(), p.exact(), p.name());
         checkTransition(c, p.h(), p.t0(), p.t1(), 0.89990373279569665841);
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("org.liepath.integrators.SchemeCases#smooth")
+    void rabiStateVectorAtSampleTimes(SchemeCases.Case c) {
+        // state mode: ψ(t) = U(t)|0⟩ with the closed-form rotating-frame propagator, at the sample times
+        double[] times = {1.5, 4, 7.25};
+        Evolution ev = Evolve.of(ReferenceProblems.rabi(1, 0.3, 0.9, 10).h()).over(0, 10).scheme(c.get()).tolerance(TOL)
+                .state(org.liepath.core.StateVector.basis(2, 0)).sampleAt(times).run();
+        assertTrue(ev.status().isSuccess(), () -> c + ": " + ev.status());
+        Trajectory tr = ev.trajectory();
+        for (double t : times) {
+            int k = java.util.Arrays.binarySearch(tr.times(), t);
+            assertTrue(k >= 0, c + ": no sample at t = " + t);
+            Operator u = ReferenceProblems.rabiExact(1, 0.3, 0.9, t);
+            org.liepath.core.StateVector exact = org.liepath.core.StateVector.of(
+                    new double[]{u.re(0, 0), u.re(1, 0)}, new double[]{u.im(0, 0), u.im(1, 0)});
+            // the samples are taken on the way, so their error is at most the final budget
+            assertEquals(0, Exact.maxDiff(tr.state(k), exact), 2 * budget(c, ev), c + " at t = " + t);
+        }
+        Operator u10 = ReferenceProblems.rabiExact(1, 0.3, 0.9, 10);
+        assertEquals(u10.re(1, 0), ev.state().re(1), 2 * budget(c, ev), c.name());
+        assertEquals(u10.im(1, 0), ev.state().im(1), 2 * budget(c, ev), c.name());
     }
 
     // ------------------------------------------------------------------ mpmath references (linear drive, two qubits)

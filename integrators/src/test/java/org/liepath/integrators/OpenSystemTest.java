@@ -100,6 +100,26 @@ class OpenSystemTest {
         assertEquals(egIm, rho.im(0, 1), 1e-10);
     }
 
+    @Test
+    void oneSampledRunReproducesTheTransientTable() {
+        // same values as opticalBlochTransient, from one run with samples at t = 1 and 2 (steps land on them)
+        Evolution ev = Evolve.of(atom(1, 0.5, 1, 0)).over(0, 5).tolerance(TOL).density(GROUND).sampleAt(1, 2).run();
+        assertTrue(ev.status().isSuccess(), () -> ev.status().toString());
+        Trajectory tr = ev.trajectory();
+        double[][] table = {{1, 0.1406423163699099, 0.082392014145719433, -0.3315835562121646},
+                {2, 0.28186689768765842, 0.192940481530519, -0.3583900322055541},
+                {5, 0.25118781368886936, 0.24450753083506668, -0.23899412144258958}};
+        for (double[] row : table) {
+            int k = Arrays.binarySearch(tr.times(), row[0]);
+            assertTrue(k >= 0, "no sample at t = " + row[0] + " in " + Arrays.toString(tr.times()));
+            Operator rho = tr.density(k);
+            assertEquals(row[1], rho.re(0, 0), 1e-10, "t = " + row[0]);
+            assertEquals(row[2], rho.re(0, 1), 1e-10, "t = " + row[0]);
+            assertEquals(row[3], rho.im(0, 1), 1e-10, "t = " + row[0]);
+        }
+        assertEquals(0, Exact.maxDiff(tr.density(tr.size() - 1), ev.density()), 0.0, "last sample is the result");
+    }
+
     @ParameterizedTest(name = "t = {0}")
     @CsvSource({"5, 0.1636135534237858, 0.3613093381975289, -0.04635845671559975",
             "10, 0.4964405482516496, 0.2434644895550065, 0.3764396965771534"})
