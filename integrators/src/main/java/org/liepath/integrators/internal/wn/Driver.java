@@ -1,5 +1,6 @@
 package org.liepath.integrators.internal.wn;
 
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
@@ -154,9 +155,8 @@ public final class Driver {
                     res.sampleU.add(new double[][]{ur, ui});
                     nextSample[0]++;
                 }
-                double[] yc = interp.getInterpolatedState();
                 interp.setInterpolatedTime(tc);
-                yc = interp.getInterpolatedState();
+                double[] yc = interp.getInterpolatedState();
                 System.arraycopy(yc, 0, lastY, 0, sz);
                 lastT[0] = tc;
                 if (!monitor.onProgress(Math.min(1.0, Math.abs(tc - t0) / span), counters[1])) {
@@ -190,7 +190,7 @@ public final class Driver {
                 stopIdx++;
             } catch (Reanchor e) {
                 restart = true;
-            } catch (Singular | MathIllegalStateException e) {
+            } catch (Singular | MathIllegalStateException | MathIllegalArgumentException e) {
                 if (!reanchor || lastT[0] == t) {
                     res.failure = (e instanceof Singular ? "the chart is singular" : "the coordinate integrator failed ("
                             + e.getMessage() + ")") + " at t = " + lastT[0]
