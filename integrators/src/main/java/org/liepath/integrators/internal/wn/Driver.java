@@ -41,6 +41,11 @@ public final class Driver {
 
         /** out (planar N×N) = the chart's product at coordinates y (the propagator relative to the chart's base). */
         void reconstruct(double[] y, double[] outR, double[] outI);
+
+        /** @return a description of the breakdown at y, used when health exceeds 1 and re-anchoring is off */
+        default String breakdown(double[] y) {
+            return "the chart became ill-conditioned";
+        }
     }
 
     /** The outcome. */
@@ -60,6 +65,14 @@ public final class Driver {
 
         Reanchor() {
             super(null, null, false, false);
+        }
+    }
+
+    private static final class Breakdown extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        Breakdown(String message) {
+            super(message, null, false, false);
         }
     }
 
@@ -162,8 +175,11 @@ public final class Driver {
                 if (!monitor.onProgress(Math.min(1.0, Math.abs(tc - t0) / span), counters[1])) {
                     throw new Cancelled();
                 }
-                if (reanchor && !isLast && model.health(yc) > 1) {
-                    throw new Reanchor();
+                if (!isLast && model.health(yc) > 1) {
+                    if (reanchor) {
+                        throw new Reanchor();
+                    }
+                    throw new Breakdown(model.breakdown(yc) + " at t = " + tc);
                 }
             }
         };
@@ -198,6 +214,9 @@ public final class Driver {
                     break;
                 }
                 restart = true;
+            } catch (Breakdown e) {
+                res.failure = e.getMessage();
+                break;
             } catch (Cancelled e) {
                 res.cancelled = true;
                 res.failure = "cancelled by the monitor at t = " + lastT[0];
