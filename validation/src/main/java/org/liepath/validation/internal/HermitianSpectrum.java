@@ -1,56 +1,47 @@
 package org.liepath.validation.internal;
 
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.EigenDecomposition;
-import org.apache.commons.math3.linear.RealMatrix;
 import org.liepath.core.Operator;
+import org.liepath.core.internal.HermitianEigen;
 
-import java.util.Arrays;
 import java.util.function.DoubleUnaryOperator;
 
 /**
- * Eigenvalues and matrix functions of a Hermitian matrix H = A + iB through its real symmetric 2n×2n embedding
- * M = [[A, −B], [B, A]], diagonalised by Commons Math's symmetric eigen-solver.
- *
- * <p>Why the embedding: it is a real algebra homomorphism, so f(M) is the embedding of f(H) for any real function f
- * of the spectrum, and every eigenvalue of H appears exactly twice in M. Reading f(H) off the blocks of f(M) avoids
- * having to pair degenerate complex eigenvectors. Cost O((2n)³) — eight times a direct complex solver; fine for the
- * validation sizes (n ≤ 64). Not part of the public API.
+ * Eigenvalues and matrix functions f(H) = V f(Λ) V† of the Hermitian part of a matrix, on top of core's Hermitian
+ * eigen-solver (Householder tridiagonalisation + implicit QL). Immutable once built; each call to {@link #of}
+ * uses its own workspace, so instances may be shared between threads. Cost O(n³). Not part of the public API.
  */
 public final class HermitianSpectrum {
     private final int n;
-    private final double[] values;       // ascending, each eigenvalue of H once
-    private final EigenDecomposition eig;
+    private final double[] values;       // ascending
+    private final double[] vr, vi;       // column j = eigenvector of values[j], planar row-major
 
-    private HermitianSpectrum(int n, double[] values, EigenDecomposition eig) {
+    private HermitianSpectrum(int n, double[] values, double[] vr, double[] vi) {
         this.n = n;
         this.values = values;
-        this.eig = eig;
+        this.vr = vr;
+        this.vi = vi;
     }
 
-    /** Decomposes the Hermitian part (H + H†)/2 of the argument. */
+    /**
+     * Decomposes (H + H†)/2.
+     *
+     * @throws IllegalStateException if the QL iteration does not converge (not observed in practice)
+     */
     public static HermitianSpectrum of(Operator h) {
         int n = h.dim();
-        double[][] m = new double[2 * n][2 * n];
+        double[] hr = new double[n * n], hi = new double[n * n];
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < n; j++) {
-                double a = 0.5 * (h.re(i, j) + h.re(j, i));
-                double b = 0.5 * (h.im(i, j) - h.im(j, i));
-                m[i][j] = a;
-                m[i + n][j + n] = a;
-                m[i][j + n] = -b;
-                m[i + n][j] = b;
+                // the Hermitian part: defined for any input, and what a Hermitian solver must see
+                hr[i * n + j] = 0.5 * (h.re(i, j) + h.re(j, i));
+                hi[i * n + j] = 0.5 * (h.im(i, j) - h.im(j, i));
             }
         }
-        EigenDecomposition eig = new EigenDecomposition(new Array2DRowRealMatrix(m, false));
-        double[] all = eig.getRealEigenvalues().clone();
-        Arrays.sort(all);
-        double[] values = new double[n];
-        for (int k = 0; k < n; k++) {
-            // the doubled eigenvalues sit next to each other after sorting; average the pair against rounding
-            values[k] = 0.5 * (all[2 * k] + all[2 * k + 1]);
+        double[] lambda = new double[n], vr = new double[n * n], vi = new double[n * n];
+        if (!new HermitianEigen(n).compute(hr, hi, lambda, vr, vi)) {
+            throw new IllegalStateException("Hermitian eigen-solver did not converge for a " + n + "x" + n + " matrix");
         }
-        return new HermitianSpectrum(n, values, eig);
+        return new HermitianSpectrum(n, lambda, vr, vi);
     }
 
     /** @return the eigenvalues, ascending (a fresh copy) */
@@ -70,21 +61,19 @@ public final class HermitianSpectrum {
 
     /** @return f(H) = V f(Λ) V†, Hermitian */
     public Operator apply(DoubleUnaryOperator f) {
-        RealMatrix v = eig.getV();
-        double[] lam = eig.getRealEigenvalues();
-        int m = 2 * n;
-        double[] fl = new double[m];
-        for (int k = 0; k < m; k++) {
-            fl[k] = f.applyAsDouble(lam[k]);
+        double[] fl = new double[n];
+        for (int k = 0; k < n; k++) {
+            fl[k] = f.applyAsDouble(values[k]);
         }
         double[] re = new double[n * n], im = new double[n * n];
-        double[][] vd = v.getData();
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < n; j++) {
                 double a = 0, b = 0;
-                for (int k = 0; k < m; k++) {
-                    a += vd[i][k] * fl[k] * vd[j][k];
-                    b += vd[i + n][k] * fl[k] * vd[j][k];
+                for (int k = 0; k < n; k++) {
+                    // V_ik f_k conj(V_jk)
+                    double xr = vr[i * n + k], xi = vi[i * n + k], yr = vr[j * n + k], yi = -vi[j * n + k];
+                    a += fl[k] * (xr * yr - xi * yi);
+                    b += fl[k] * (xr * yi + xi * yr);
                 }
                 re[i * n + j] = a;
                 im[i * n + j] = b;
