@@ -1,9 +1,13 @@
 package org.liepath.validation;
 
+import org.liepath.core.Hamiltonian;
 import org.liepath.core.InvalidInputException;
 import org.liepath.core.InvalidInputException.Reason;
 import org.liepath.core.Operator;
 import org.liepath.core.internal.Require;
+import org.liepath.integrators.Evolution;
+import org.liepath.integrators.Evolve;
+import org.liepath.integrators.Scheme;
 import org.liepath.validation.internal.TextTable;
 
 import java.util.ArrayList;
@@ -43,7 +47,10 @@ public final class ConvergenceStudy {
     public record Point(int steps, double stepSize, double error, long evaluations, double seconds) {
     }
 
-    /** What a run returns: the result and, where known, the number of generator evaluations (−1 if unknown). */
+    /**
+     * What a run returns: the result (null if the run failed: the point is then unusable) and, where known, the
+     * number of generator evaluations (−1 if unknown).
+     */
     public record Outcome(Operator result, long evaluations) {
     }
 
@@ -68,6 +75,7 @@ public final class ConvergenceStudy {
      * @param reference the exact or high-accuracy result
      */
     public static Builder of(String label, IntFunction<Operator> method, Operator reference) {
+        // a null result from the method marks a failed run (unusable point)
         Require.nonNull(method, "method");
         return new Builder(label, n -> new Outcome(method.apply(n), -1), reference);
     }
@@ -76,6 +84,29 @@ public final class ConvergenceStudy {
     public static Builder ofOutcomes(String label, IntFunction<Outcome> method, Operator reference) {
         Require.nonNull(method, "method");
         return new Builder(label, method, reference);
+    }
+
+    /**
+     * Starts a study of a scheme with fixed steps on a Hamiltonian's propagator over [t0, t1], against the reference
+     * integrator at {@link CrossCheck#DEFAULT_REFERENCE_TOLERANCE} (computed here, once). Evaluation counts come
+     * from the runs' statistics. A run that does not succeed gives an unusable (NaN) point.
+     */
+    public static Builder of(Hamiltonian h, double t0, double t1, Scheme scheme) {
+        Require.nonNull(h, "h");
+        Operator ref = Evolve.of(h).over(t0, t1).scheme(Scheme.reference())
+                .tolerance(CrossCheck.DEFAULT_REFERENCE_TOLERANCE).run().propagator();
+        return of(h, t0, t1, scheme, ref);
+    }
+
+    /** As {@link #of(Hamiltonian, double, double, Scheme)} with a given reference propagator (shared between studies). */
+    public static Builder of(Hamiltonian h, double t0, double t1, Scheme scheme, Operator reference) {
+        Require.nonNull(h, "h");
+        Require.nonNull(scheme, "scheme");
+        Evolve base = Evolve.of(h).over(t0, t1).scheme(scheme);
+        return ofOutcomes(scheme.name(), n -> {
+            Evolution e = base.steps(n).run();
+            return new Outcome(e.status().isSuccess() ? e.propagator() : null, e.stats().evaluations());
+        }, reference).span(Math.abs(t1 - t0));
     }
 
     /** Mutable builder of a study; not thread-safe. */
@@ -122,11 +153,15 @@ public final class ConvergenceStudy {
             for (int l = 0; l < levels; l++) {
                 int n = start << l;
                 long t0 = System.nanoTime();
-                Outcome o = Require.nonNull(method.apply(n), "method result");
+                Outcome o = Require.nonNull(method.apply(n), "method outcome");
                 double sec = (System.nanoTime() - t0) * 1e-9;
-                Operator r = Require.nonNull(o.result(), "method result");
-                Require.sameDim(reference.dim(), r.dim(), "method result");
-                pts.add(new Point(n, span / n, r.distance(reference), o.evaluations(), sec));
+                Operator r = o.result();
+                double err = Double.NaN;
+                if (r != null) {
+                    Require.sameDim(reference.dim(), r.dim(), "method result");
+                    err = r.distance(reference);
+                }
+                pts.add(new Point(n, span / n, err, o.evaluations(), sec));
             }
             return fit(label, pts, NOISE_FLOOR * Math.max(1, reference.norm()));
         }
