@@ -8,7 +8,6 @@ import org.liepath.core.internal.Expm;
 import org.liepath.core.internal.HermitianExp;
 import org.liepath.core.internal.Require;
 
-import java.util.Arrays;
 import java.util.Locale;
 
 /**
@@ -24,6 +23,9 @@ import java.util.Locale;
  * <p>Thread-safety: instances are immutable and safe to share between threads.
  */
 public final class Operator {
+    /** Largest dimension n whose n² entries fit in one Java array (46340² &lt; 2³¹). */
+    public static final int MAX_DIM = 46340;
+
     final int n;
     final double[] re;
     final double[] im;
@@ -73,7 +75,7 @@ public final class Operator {
      * @throws InvalidInputException if lengths differ from n², or an entry is not finite
      */
     public static Operator ofPlanar(int n, double[] re, double[] im) {
-        Require.positive(n, "n");
+        checkDim(n, "n");
         Require.nonNull(re, "re");
         Require.nonNull(im, "im");
         if (re.length != n * n) {
@@ -89,7 +91,7 @@ public final class Operator {
 
     /** The n×n identity. */
     public static Operator identity(int n) {
-        Require.positive(n, "n");
+        checkDim(n, "n");
         double[] r = new double[n * n];
         for (int i = 0; i < n; i++) {
             r[i * n + i] = 1;
@@ -99,7 +101,7 @@ public final class Operator {
 
     /** The n×n zero operator. */
     public static Operator zero(int n) {
-        Require.positive(n, "n");
+        checkDim(n, "n");
         return new Operator(n, new double[n * n], new double[n * n]);
     }
 
@@ -120,7 +122,7 @@ public final class Operator {
 
     /** The matrix unit |i⟩⟨j| of dimension n (a single 1 at row i, column j). */
     public static Operator unit(int n, int i, int j) {
-        Require.positive(n, "n");
+        checkDim(n, "n");
         Require.index(i, n, "i");
         Require.index(j, n, "j");
         double[] r = new double[n * n];
@@ -441,6 +443,10 @@ public final class Operator {
     /** @return the Kronecker product this ⊗ b (this is the left, slower-varying factor) */
     public Operator kron(Operator b) {
         Require.nonNull(b, "b");
+        if ((long) n * b.n > MAX_DIM) {
+            throw InvalidInputException.of(Reason.LIMIT_EXCEEDED, "b", "a product dimension ≤ " + MAX_DIM,
+                    n + " × " + b.n + " = " + (long) n * b.n);
+        }
         int m = b.n, nm = n * m;
         double[] r = new double[nm * nm], i = new double[nm * nm];
         for (int a1 = 0; a1 < n; a1++) {
@@ -517,17 +523,41 @@ public final class Operator {
             return false;
         }
         Operator b = (Operator) o;
-        return n == b.n && Arrays.equals(re, b.re) && Arrays.equals(im, b.im);
+        // entries are finite, so == is numeric equality; Arrays.equals would tell 0.0 from −0.0 (e.g. zero vs −1·zero)
+        if (n != b.n) {
+            return false;
+        }
+        for (int k = 0; k < n * n; k++) {
+            if (re[k] != b.re[k] || im[k] != b.im[k]) {
+                return false;
+            }
+        }
+        return true;
     }
 
     @Override
     public int hashCode() {
-        return 31 * (31 * n + Arrays.hashCode(re)) + Arrays.hashCode(im);
+        return 31 * (31 * n + zeroSafeHash(re)) + zeroSafeHash(im);
     }
 
-    /** A readable matrix, one row per line, entries to 4 significant digits; large operators are abbreviated. */
+    /** A hash consistent with numeric equality: 0.0 and −0.0 hash alike. */
+    static int zeroSafeHash(double[] a) {
+        int h = 1;
+        for (double v : a) {
+            long bits = Double.doubleToLongBits(v + 0.0);
+            h = 31 * h + (int) (bits ^ (bits >>> 32));
+        }
+        return h;
+    }
+
+    /**
+     * A readable matrix, one row per line, entries to 4 significant digits; large operators are abbreviated. Parts
+     * below 1e-14 of the largest entry modulus print as 0 (rounding noise), so a matrix of tiny numbers still prints
+     * its values.
+     */
     @Override
     public String toString() {
+        double tiny = noiseFloor(re, im);
         StringBuilder sb = new StringBuilder();
         sb.append("Operator ").append(n).append('x').append(n);
         int shown = Math.min(n, 8);
@@ -537,7 +567,7 @@ public final class Operator {
                 if (b > 0) {
                     sb.append(", ");
                 }
-                sb.append(formatEntry(re[a * n + b], im[a * n + b]));
+                sb.append(formatEntry(re[a * n + b], im[a * n + b], tiny));
             }
             if (shown < n) {
                 sb.append(", …");
@@ -550,8 +580,16 @@ public final class Operator {
         return sb.toString();
     }
 
-    static String formatEntry(double r, double i) {
-        double tiny = 1e-14;
+    /** 1e-14 times the largest entry modulus: parts below it are shown as 0 by {@link #formatEntry}. */
+    static double noiseFloor(double[] re, double[] im) {
+        double max = 0;
+        for (int k = 0; k < re.length; k++) {
+            max = Math.max(max, Math.max(Math.abs(re[k]), Math.abs(im[k])));
+        }
+        return 1e-14 * max;
+    }
+
+    static String formatEntry(double r, double i, double tiny) {
         boolean hasR = Math.abs(r) > tiny, hasI = Math.abs(i) > tiny;
         if (!hasR && !hasI) {
             return "0";
@@ -570,5 +608,41 @@ public final class Operator {
             return Long.toString((long) v);
         }
         return String.format(Locale.ROOT, "%.4g", v);
+    }
+
+    // ------------------------------------------------------------------ added conveniences
+
+    /**
+     * The matrix power A^k for k ≥ 0 (A⁰ = I) by repeated squaring: about 2·log₂k products, each O(n³).
+     *
+     * @throws InvalidInputException if k is negative, or with reason NOT_FINITE if the result overflows
+     */
+    public Operator power(int k) {
+        if (k < 0) {
+            throw InvalidInputException.of(Reason.OUT_OF_RANGE, "k", "a non-negative exponent", k);
+        }
+        Operator result = identity(n), base = this;
+        for (int e = k; e > 0; e >>= 1) {
+            if ((e & 1) != 0) {
+                result = result.times(base);
+            }
+            if (e > 1) {
+                base = base.times(base);
+            }
+        }
+        for (int q = 0; q < n * n; q++) {
+            if (!Double.isFinite(result.re[q]) || !Double.isFinite(result.im[q])) {
+                throw InvalidInputException.of(Reason.NOT_FINITE, "k", "a power whose entries are finite",
+                        k + " (overflow, ‖A‖₁ = " + norm1() + ")");
+            }
+        }
+        return result;
+    }
+
+    private static void checkDim(int n, String name) {
+        Require.positive(n, name);
+        if (n > MAX_DIM) {
+            throw InvalidInputException.of(Reason.LIMIT_EXCEEDED, name, "a dimension ≤ " + MAX_DIM, n);
+        }
     }
 }

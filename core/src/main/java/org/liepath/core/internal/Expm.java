@@ -252,10 +252,22 @@ public final class Expm {
         // δ² = h² + b·g
         double sqr = hr * hr - hi * hi + br * gr - bi * gi;
         double sqi = 2 * hr * hi + br * gi + bi * gr;
-        // principal square root of δ²
-        double mod = Math.sqrt(HermitianEigen.hyp(sqr, sqi));
-        double ang = 0.5 * Math.atan2(sqi, sqr);
-        double delr = mod * Math.cos(ang), deli = mod * Math.sin(ang);
+        // principal square root of δ², in the cancellation-free form (no trigonometry, so that a real δ² < 0,
+        // the Hermitian case, gives an exactly imaginary δ and exactly unimodular e^{μ±δ})
+        double abs2 = HermitianEigen.hyp(sqr, sqi);
+        double mod = Math.sqrt(abs2);
+        double delr, deli;
+        if (abs2 == 0) {
+            delr = 0;
+            deli = 0;
+        } else if (sqr >= 0) {
+            delr = Math.sqrt(0.5 * (abs2 + sqr));
+            deli = sqi / (2 * delr);
+        } else {
+            double q = Math.sqrt(0.5 * (abs2 - sqr));
+            delr = Math.abs(sqi) / (2 * q);
+            deli = Math.copySign(q, sqi);
+        }
         double chr, chi, shr, shi; // e^μ cosh δ and e^μ sinh δ / δ
         if (mod < 0.5) {
             // sinh δ / δ = Σ δ^{2k} / (2k+1)!  (|δ²| < 1/4: 9 terms leave < 1e-23); cosh δ = Σ δ^{2k} / (2k)!
