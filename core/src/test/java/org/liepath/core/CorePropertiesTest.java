@@ -198,6 +198,33 @@ class CorePropertiesTest {
         assertTrue(Superoperator.kraus(back).distance(ch) <= 1e-12, "round trip");
     }
 
+    @ParameterizedTest(name = "seed {0}")
+    @MethodSource("org.liepath.testing.Seeds#fewCases")
+    void randomGklsSteadyStatesAreDensityMatricesInTheKernel(long seed) {
+        // a generic GKLS generator (random H, two random jump operators) has a unique steady state, a density matrix
+        // (H. Spohn, Rep. Math. Phys. 10 (1976) 189 [M]); its positivity is checked with Commons Math eigenvalues
+        Random r = new Random(seed);
+        int n = 2 + r.nextInt(3);
+        Lindbladian l = Lindbladian.builder(Hamiltonian.constant(Seeds.randomHermitian(r, n)))
+                .jump(0.2 + r.nextDouble(), Seeds.randomMatrix(r, n)).jump(0.2 + r.nextDouble(), Seeds.randomMatrix(r, n))
+                .build();
+        Superoperator s = l.at(0);
+        Operator ss = l.steadyState();
+        double sn = s.matrix().norm();
+        assertTrue(s.apply(ss).norm() <= 1e-12 * sn, () -> "residual " + s.apply(ss).norm());
+        assertEquals(1.0, ss.trace().getReal(), 1e-13);
+        assertTrue(ss.isHermitian(0));
+        double[] ev = GklsReferenceTest.realEmbeddingEigenvalues(ss);
+        assertTrue(ev[0] >= -1e-12, () -> "min eigenvalue " + ev[0]);
+        // the channel of the generator is CP: its Choi → Kraus → superoperator round trip closes
+        Superoperator ch = s.exp(0.5);
+        List<Operator> ks = ch.krausOperators();
+        assertTrue(ks.size() <= n * n);
+        assertTrue(Superoperator.kraus(ks).distance(ch) <= 1e-11 * ch.matrix().norm(), "Kraus round trip");
+        // and the steady state is a fixed point of the channel
+        assertTrue(ch.apply(ss).distance(ss) <= 1e-12 * sn);
+    }
+
     static List<Operator> randomKraus(Random r, int n, int count) {
         int rows = n * count;
         double[][] vr = new double[rows][n], vi = new double[rows][n];
