@@ -258,6 +258,30 @@ class AlgebraicIdentitiesTest {
         }
     }
 
+    @Test
+    void gellMannBasesNest() {
+        // with the documented order, the first (d−1)² − 1 matrices of dimension d are those of dimension d−1 padded
+        // with a zero row and column, and the last one is diag(1, …, 1, −(d−1))·sqrt(2/(d(d−1))) (Bertlmann & Krammer
+        // 2008, eq. (5) [M])
+        for (int d = 3; d <= 6; d++) {
+            List<Operator> big = Levels.gellMann(d), small = Levels.gellMann(d - 1);
+            for (int a = 0; a < small.size(); a++) {
+                double[][] re = new double[d][d], im = new double[d][d];
+                for (int i = 0; i < d - 1; i++) {
+                    for (int j = 0; j < d - 1; j++) {
+                        re[i][j] = small.get(a).re(i, j);
+                        im[i][j] = small.get(a).im(i, j);
+                    }
+                }
+                assertEquals(Operator.of(re, im), big.get(a), "d = " + d + ", a = " + a);
+            }
+            double[] diag = new double[d];
+            java.util.Arrays.fill(diag, 1);
+            diag[d - 1] = -(d - 1);
+            close(Operator.diagonal(diag).scale(Math.sqrt(2.0 / (d * (d - 1.0)))), big.get(d * d - 2), 1e-15, "last");
+        }
+    }
+
     // ------------------------------------------------------------------ vectorisation and embedding
 
     @Test

@@ -216,6 +216,41 @@ class GklsReferenceTest {
         assertEquals(formula, ss.re(0, 0), 1e-14, "closed form");
         // L(ρ_ss) = 0
         assertTrue(l.at(0).apply(ss).norm() <= 1e-14);
+        // independently: the null vector of the 4×4 Liouvillian from Commons Math's SVD of its real 8×8 embedding
+        close(nullStateBySvd(l.at(0)), ss, 1e-13, "Commons Math null vector");
+    }
+
+    /**
+     * The trace-one null vector of a generator from the right singular vector of the smallest singular value of the
+     * real embedding [[A, −B],[B, A]] of S = A + iB (Commons Math SingularValueDecomposition): a real null vector
+     * (x; y) gives the complex null vector x + iy.
+     */
+    static Operator nullStateBySvd(Superoperator s) {
+        Operator m = s.matrix();
+        int nn = m.dim(), n = s.dim();
+        double[][] e = new double[2 * nn][2 * nn];
+        for (int i = 0; i < nn; i++) {
+            for (int k = 0; k < nn; k++) {
+                e[i][k] = m.re(i, k);
+                e[nn + i][nn + k] = m.re(i, k);
+                e[i][nn + k] = -m.im(i, k);
+                e[nn + i][k] = m.im(i, k);
+            }
+        }
+        org.apache.commons.math3.linear.SingularValueDecomposition svd =
+                new org.apache.commons.math3.linear.SingularValueDecomposition(new Array2DRowRealMatrix(e, false));
+        double[] sv = svd.getSingularValues(); // descending
+        assertTrue(sv[2 * nn - 1] <= 1e-13 * sv[0] && sv[2 * nn - 3] > 1e-8 * sv[0], "a two-dimensional real kernel");
+        double[] v = svd.getV().getColumn(2 * nn - 1);
+        double[][] re = new double[n][n], im = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                re[i][j] = v[i + n * j];
+                im[i][j] = v[nn + i + n * j];
+            }
+        }
+        Operator rho = Operator.of(re, im);
+        return rho.scale(rho.trace().reciprocal());
     }
 
     @ParameterizedTest(name = "t = {0}")
