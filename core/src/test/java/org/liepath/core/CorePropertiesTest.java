@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -264,6 +265,31 @@ class CorePropertiesTest {
             ks.add(Operator.of(kr, ki));
         }
         return ks;
+    }
+
+    @ParameterizedTest(name = "seed {0}")
+    @MethodSource("org.liepath.testing.Seeds#fewCases")
+    void operationsNeverModifyTheirInputs(long seed) {
+        // immutability contract: every operation returns a new value and leaves its operands bit for bit unchanged
+        Random r = new Random(seed);
+        int n = 1 + r.nextInt(3);
+        Operator a = Seeds.randomMatrix(r, n), b = Seeds.randomMatrix(r, n);
+        double[] ar = a.reArray(), ai = a.imArray(), br = b.reArray(), bi = b.imArray();
+        Object[] results = {a.plus(b), a.minus(b), a.times(b), a.scale(2), a.scale(new Complex(0, 1)), a.timesI(),
+                a.dagger(), a.transpose(), a.conjugate(), a.commutator(b), a.anticommutator(b), a.trace(), a.inner(b),
+                a.norm(), a.norm1(), a.distance(b), a.kron(b), a.exp(), a.power(3), a.toEjml(), a.toString(),
+                Superoperator.sandwich(a, b).apply(b), Superoperator.kraus(List.of(a, b)).choi(),
+                HilbertSpace.of(n, n).partialTrace(a.kron(b), 0), Lindbladian.builder(Hamiltonian.constant(
+                        b.plus(b.dagger()))).jump(1, a).build().at(0).apply(b)};
+        assertEquals(25, results.length);
+        assertArrayEquals(ar, a.reArray(), 0);
+        assertArrayEquals(ai, a.imArray(), 0);
+        assertArrayEquals(br, b.reArray(), 0);
+        assertArrayEquals(bi, b.imArray(), 0);
+        // the zero-allocation coefficient call writes only its output
+        double[] out = {7, 7, 7};
+        Hamiltonian.builder(n).term(0.5, Operator.identity(n)).build().coefficients(1.0, out);
+        assertArrayEquals(new double[]{0.5, 7, 7}, out, 0);
     }
 
     @ParameterizedTest(name = "seed {0}")
