@@ -1,0 +1,307 @@
+package org.liepath.algebra;
+
+import org.liepath.algebra.internal.MatVec;
+import org.liepath.core.InvalidInputException;
+import org.liepath.core.InvalidInputException.Reason;
+import org.liepath.core.Operator;
+import org.liepath.core.internal.Require;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+
+/**
+ * Subalgebras spanned by subsets of a basis with the <em>monomial-bracket property</em>: the elements are pairwise
+ * orthogonal under tr(X†Y) and the bracket of any two is zero or a non-zero multiple of one element of the basis
+ * (Pauli strings: [P, Q] = 0 or ±2i·PQ with PQ ∝ a Pauli string; matrix units: [E_ij, E_kl] = δ_jk E_il − δ_li E_kj
+ * for the off-diagonal ones). A subset S is then closed exactly when, for every pair in S whose bracket lands on
+ * element k, k is in S, so closure is decided on the "i, j land on k" table with bit masks and no dense algebra.
+ *
+ * <p>Elements that are all Hermitian are read with the DLA convention (−i b, real algebras), all anti-Hermitian as
+ * they are (real algebras), anything else as a complex algebra ({@link LieAlgebra#complexSpan}).
+ *
+ * <p>Stateless and thread-safe.
+ */
+public final class Subalgebras {
+    /** Largest basis handled (subsets are 64-bit masks). */
+    public static final int MAX_BASIS = 64;
+    /** Default limit on the number of closed subsets enumerated. */
+    public static final int DEFAULT_MAX_SUBSETS = 1 << 20;
+
+    private Subalgebras() {
+    }
+
+    /**
+     * Every non-empty subset of the basis that is closed under the bracket, each as a {@link LieAlgebra} spanned by
+     * that subset (its {@link LieAlgebra#type()} is computed on demand). Ordered by dimension, then by the subset's
+     * indices in lexicographic order. Enumeration: breadth-first over closures — every closed set is the closure of a
+     * smaller closed set plus one element — so the work is proportional to (number of closed sets) × (basis size),
+     * not to 2^m. For the 15 non-identity two-qubit Pauli strings this visits the closed sets instead of the 32767
+     * candidate subsets.
+     *
+     * @throws InvalidInputException NULL, EMPTY, DIMENSION_MISMATCH; LIMIT_EXCEEDED for more than {@value #MAX_BASIS}
+     *                               elements or more than {@value #DEFAULT_MAX_SUBSETS} closed subsets; UNSUPPORTED if
+     *                               the basis lacks the monomial-bracket property (the message names the pair);
+     *                               NOT_CLOSED if a bracket leaves the span of the basis
+     */
+    public static List<LieAlgebra> closedSubsets(List<Operator> basis) {
+        Table t = table(basis);
+        List<Long> masks = enumerate(t, DEFAULT_MAX_SUBSETS);
+        List<LieAlgebra> out = new ArrayList<>(masks.size());
+        for (long mask : masks) {
+            out.add(t.algebra(mask));
+        }
+        return Collections.unmodifiableList(out);
+    }
+
+    /** The closed subsets as sorted index arrays, in the order of {@link #closedSubsets}. */
+    public static List<int[]> closedIndexSets(List<Operator> basis) {
+        Table t = table(basis);
+        List<int[]> out = new ArrayList<>();
+        for (long mask : enumerate(t, DEFAULT_MAX_SUBSETS)) {
+            out.add(indices(mask));
+        }
+        return Collections.unmodifiableList(out);
+    }
+
+    /**
+     * The smallest closed subset containing the chosen elements, as an algebra; e.g. {@code closureOf(paulis, 0, 4)}.
+     * (For generators without the monomial-bracket property use {@link LieAlgebra#generatedBy}.)
+     *
+     * @throws InvalidInputException as {@link #closedSubsets}, and OUT_OF_RANGE / EMPTY for the indices
+     */
+    public static LieAlgebra closureOf(List<Operator> basis, int... chosen) {
+        Table t = table(basis);
+        Require.nonNull(chosen, "chosen");
+        if (chosen.length == 0) {
+            throw InvalidInputException.of(Reason.EMPTY, "chosen", "at least one index", "none");
+        }
+        long mask = 0;
+        for (int c : chosen) {
+            Require.index(c, t.m, "chosen");
+            mask |= 1L << c;
+        }
+        return t.algebra(t.close(mask));
+    }
+
+    /** The closure of a subset given as a bit mask (bit k = element k), as indices. */
+    public static int[] closureIndices(List<Operator> basis, int... chosen) {
+        Table t = table(basis);
+        long mask = 0;
+        for (int c : Require.nonNull(chosen, "chosen")) {
+            Require.index(c, t.m, "chosen");
+            mask |= 1L << c;
+        }
+        return indices(t.close(mask));
+    }
+
+    static int[] indices(long mask) {
+        int[] out = new int[Long.bitCount(mask)];
+        int c = 0;
+        for (int k = 0; k < 64; k++) {
+            if ((mask >>> k & 1) != 0) {
+                out[c++] = k;
+            }
+        }
+        return out;
+    }
+
+    /** The landing table: land[i][j] = k if [b_i, b_j] ∝ b_k, −1 if they commute. */
+    private static final class Table {
+        final int m;
+        final int[][] land;
+        final List<Operator> basis;
+
+        Table(int m, int[][] land, List<Operator> basis) {
+            this.m = m;
+            this.land = land;
+            this.basis = basis;
+        }
+
+        long close(long mask) {
+            long s = mask;
+            boolean grew = true;
+            while (grew) {
+                grew = false;
+                for (int i = 0; i < m; i++) {
+                    if ((s >>> i & 1) == 0) {
+                        continue;
+                    }
+                    int[] row = land[i];
+                    for (int j = i + 1; j < m; j++) {
+                        int k = row[j];
+                        if (k >= 0 && (s >>> j & 1) != 0 && (s >>> k & 1) == 0) {
+                            s |= 1L << k;
+                            grew = true;
+                        }
+                    }
+                }
+            }
+            return s;
+        }
+
+        LieAlgebra algebra(long mask) {
+            List<Operator> sub = new ArrayList<>();
+            for (int k : indices(mask)) {
+                sub.add(basis.get(k));
+            }
+            return kindComplex ? LieAlgebra.complexSpan(sub) : LieAlgebra.spannedBy(sub);
+        }
+
+        boolean kindComplex;
+    }
+
+    private static List<Long> enumerate(Table t, int maxSubsets) {
+        Set<Long> seen = new HashSet<>();
+        ArrayDeque<Long> queue = new ArrayDeque<>();
+        queue.add(0L);
+        seen.add(0L);
+        while (!queue.isEmpty()) {
+            long c = queue.poll();
+            for (int x = 0; x < t.m; x++) {
+                if ((c >>> x & 1) != 0) {
+                    continue;
+                }
+                long d = t.close(c | 1L << x);
+                if (seen.add(d)) {
+                    if (seen.size() > maxSubsets + 1) {
+                        throw InvalidInputException.of(Reason.LIMIT_EXCEEDED, "basis",
+                                "at most " + maxSubsets + " closed subsets", "more");
+                    }
+                    queue.add(d);
+                }
+            }
+        }
+        seen.remove(0L);
+        List<Long> out = new ArrayList<>(seen);
+        out.sort((a, b) -> {
+            int ca = Long.bitCount(a), cb = Long.bitCount(b);
+            if (ca != cb) {
+                return Integer.compare(ca, cb);
+            }
+            int[] ia = indices(a), ib = indices(b);
+            for (int k = 0; k < ia.length; k++) {
+                if (ia[k] != ib[k]) {
+                    return Integer.compare(ia[k], ib[k]);
+                }
+            }
+            return 0;
+        });
+        return out;
+    }
+
+    private static Table table(List<Operator> basis) {
+        Require.nonNull(basis, "basis");
+        if (basis.isEmpty()) {
+            throw InvalidInputException.of(Reason.EMPTY, "basis", "at least one operator", "an empty list");
+        }
+        int m = basis.size();
+        if (m > MAX_BASIS) {
+            throw InvalidInputException.of(Reason.LIMIT_EXCEEDED, "basis", "at most " + MAX_BASIS + " elements",
+                    m + " elements");
+        }
+        int n = Require.nonNull(basis.get(0), "basis[0]").dim();
+        double[][] v = new double[m][];
+        int[][] sup = new int[m][];
+        boolean allH = true, allA = true;
+        for (int k = 0; k < m; k++) {
+            Operator b = Require.nonNull(basis.get(k), "basis[" + k + "]");
+            if (b.dim() != n) {
+                throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "basis[" + k + "]",
+                        "dimension " + n + " like basis[0]", "dimension " + b.dim());
+            }
+            double nb = b.norm();
+            if (nb == 0) {
+                throw InvalidInputException.of(Reason.OUT_OF_RANGE, "basis[" + k + "]", "a non-zero operator",
+                        "the zero operator");
+            }
+            double[] d = MatVec.hermitianDefects(b);
+            allH &= d[0] <= 1e-12 * Math.max(1, nb);
+            allA &= d[1] <= 1e-12 * Math.max(1, nb);
+            v[k] = MatVec.of(b, false, 1 / nb);
+            sup[k] = MatVec.support(n, v[k]);
+        }
+        // pairwise orthogonality (complex inner product: real and imaginary part)
+        for (int i = 0; i < m; i++) {
+            for (int j = i + 1; j < m; j++) {
+                double re = MatVec.dot(n, v[i], sup[i], v[j], sup[j]);
+                double im = MatVec.dot(n, v[i], sup[i], timesI(n, v[j]), null);
+                if (Math.hypot(re, im) > 1e-10) {
+                    throw InvalidInputException.of(Reason.UNSUPPORTED, "basis",
+                            "pairwise orthogonal elements (monomial-bracket property)",
+                            String.format(Locale.ROOT, "|tr(b_%d† b_%d)| / (‖b_%d‖‖b_%d‖) = %.3g", i, j, i, j,
+                                    Math.hypot(re, im)));
+                }
+            }
+        }
+        int[][] land = new int[m][m];
+        double[] c = new double[2 * n * n];
+        for (int i = 0; i < m; i++) {
+            land[i][i] = -1;
+            for (int j = i + 1; j < m; j++) {
+                MatVec.commutator(n, v[i], sup[i], v[j], sup[j], c);
+                double nc = MatVec.norm(c);
+                int k = -1;
+                if (nc > 1e-12) {
+                    double[] ic = timesI(n, c);
+                    double best = 0;
+                    for (int l = 0; l < m; l++) {
+                        // |tr(b_l† c)|
+                        double re = MatVec.dot(n, v[l], sup[l], c, null);
+                        double im = MatVec.dot(n, v[l], sup[l], ic, null);
+                        double a = Math.hypot(re, im);
+                        if (a > best) {
+                            best = a;
+                            k = l;
+                        }
+                    }
+                    // monomial: the bracket is entirely along b_k
+                    double off = Math.sqrt(Math.max(0, nc * nc - best * best));
+                    if (off > 1e-9 * nc) {
+                        double total = 0;
+                        int count = 0;
+                        for (int l = 0; l < m; l++) {
+                            double re = MatVec.dot(n, v[l], sup[l], c, null);
+                            double im = MatVec.dot(n, v[l], sup[l], ic, null);
+                            double a = re * re + im * im;
+                            total += a;
+                            if (a > 1e-18 * nc * nc) {
+                                count++;
+                            }
+                        }
+                        double outside = Math.sqrt(Math.max(0, nc * nc - total)) / nc;
+                        if (outside > 1e-9) {
+                            throw InvalidInputException.of(Reason.NOT_CLOSED, "basis",
+                                    "elements whose brackets stay in their span",
+                                    String.format(Locale.ROOT, "[b_%d, b_%d] (indices %d and %d) with a component "
+                                            + "of relative size %.3g outside the span", i, j, i, j, outside));
+                        }
+                        throw InvalidInputException.of(Reason.UNSUPPORTED, "basis",
+                                "a basis whose brackets are multiples of single elements (monomial-bracket property)",
+                                "[b_" + i + ", b_" + j + "] spread over " + count + " elements");
+                    }
+                }
+                land[i][j] = k;
+                land[j][i] = k;
+            }
+        }
+        Table t = new Table(m, land, basis);
+        t.kindComplex = !(allH || allA);
+        return t;
+    }
+
+    /** @return the vector of i·x (so that dot(a, i x) = Im tr(a† x)) */
+    private static double[] timesI(int n, double[] x) {
+        int nn = n * n;
+        double[] w = new double[2 * nn];
+        for (int q = 0; q < nn; q++) {
+            w[q] = -x[nn + q];
+            w[nn + q] = x[q];
+        }
+        return w;
+    }
+}
