@@ -259,21 +259,15 @@ public final class Subalgebras {
                             k = l;
                         }
                     }
-                    // monomial: the bracket is entirely along b_k
-                    double off = Math.sqrt(Math.max(0, nc * nc - best * best));
-                    if (off > 1e-9 * nc) {
-                        double total = 0;
-                        int count = 0;
+                    // monomial: the bracket is entirely along b_k (residuals are formed explicitly: the difference of
+                    // squared norms would lose half the digits)
+                    double one = k < 0 ? 1.0 : residual(n, c, ic, v, sup, new int[] {k}) / nc;
+                    if (one > 1e-9) {
+                        int[] all = new int[m];
                         for (int l = 0; l < m; l++) {
-                            double re = MatVec.dot(n, v[l], sup[l], c, null);
-                            double im = MatVec.dot(n, v[l], sup[l], ic, null);
-                            double a = re * re + im * im;
-                            total += a;
-                            if (a > 1e-18 * nc * nc) {
-                                count++;
-                            }
+                            all[l] = l;
                         }
-                        double outside = Math.sqrt(Math.max(0, nc * nc - total)) / nc;
+                        double outside = residual(n, c, ic, v, sup, all) / nc;
                         if (outside > 1e-9) {
                             throw InvalidInputException.of(Reason.NOT_CLOSED, "basis",
                                     "elements whose brackets stay in their span",
@@ -282,7 +276,8 @@ public final class Subalgebras {
                         }
                         throw InvalidInputException.of(Reason.UNSUPPORTED, "basis",
                                 "a basis whose brackets are multiples of single elements (monomial-bracket property)",
-                                "[b_" + i + ", b_" + j + "] spread over " + count + " elements");
+                                String.format(Locale.ROOT, "[b_%d, b_%d] with a relative part %.3g off its largest "
+                                        + "component b_%d", i, j, one, k));
                     }
                 }
                 land[i][j] = k;
@@ -292,6 +287,23 @@ public final class Subalgebras {
         Table t = new Table(m, land, basis);
         t.kindComplex = !(allH || allA);
         return t;
+    }
+
+    /** ‖c − Σ_l tr(b_l† c) b_l‖ over the listed l (b_l unit, pairwise orthogonal); ic is the vector of i·c. */
+    private static double residual(int n, double[] c, double[] ic, double[][] v, int[][] sup, int[] ls) {
+        double[] r = c.clone();
+        for (int l : ls) {
+            double re = MatVec.dot(n, v[l], sup[l], c, null);
+            double im = MatVec.dot(n, v[l], sup[l], ic, null);
+            // tr(b† c) = re − i·im with these conventions; subtract (re − i im)·b = re·b + im·(−i b)
+            MatVec.axpy(n, -re, v[l], sup[l], r);
+            double[] mib = timesI(n, v[l]);
+            for (int q = 0; q < r.length; q++) {
+                mib[q] = -mib[q];
+            }
+            MatVec.axpy(n, -im, mib, null, r);
+        }
+        return MatVec.norm(r);
     }
 
     /** @return the vector of i·x (so that dot(a, i x) = Im tr(a† x)) */
