@@ -169,6 +169,25 @@ public final class LieAlgebra {
     }
 
     /**
+     * The span of pairwise orthogonal elements already known to be closed (used by {@link Subalgebras}, whose landing
+     * table proves closure): elements are normalised, not orthogonalised, and nothing is checked. Hermitian elements
+     * are read as −i b unless {@code complex}.
+     */
+    static LieAlgebra ofClosedOrthogonal(List<Operator> orthogonal, boolean complex) {
+        int n = orthogonal.get(0).dim();
+        boolean minusI = !complex && hermitianKind(orthogonal, "basis");
+        Basis b = new Basis(n);
+        for (Operator a : orthogonal) {
+            double[] v = MatVec.of(a, minusI, 1 / a.norm());
+            b.addOrthonormal(v);
+            if (complex) {
+                b.addOrthonormal(timesI(n, v));
+            }
+        }
+        return new LieAlgebra(n, complex, DEFAULT_TOLERANCE, b, null);
+    }
+
+    /**
      * Configuration of a Lie closure: tolerance, dimension limit and progress listener. Immutable; each setter returns
      * a copy. Example: {@code LieAlgebra.closure().tolerance(1e-10).maxDimension(4096).monitor(l).of(ops)}.
      */

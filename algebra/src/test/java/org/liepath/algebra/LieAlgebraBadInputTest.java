@@ -135,5 +135,8 @@ class LieAlgebraBadInputTest {
         List<Operator> xyz = List.of(Pauli.x(), Pauli.y(), Pauli.z());
         refused(Reason.OUT_OF_RANGE, () -> Subalgebras.closureOf(xyz, 3), "chosen", "3");
         refused(Reason.EMPTY, () -> Subalgebras.closureOf(xyz), "chosen");
+        // X, Y, Z have 4 closed subsets ({X}, {Y}, {Z}, all): a limit of 3 is refused
+        refused(Reason.LIMIT_EXCEEDED, () -> Subalgebras.closedSubsets(xyz, 3), "maxSubsets", "at most 3");
+        assertEquals(4, Subalgebras.closedSubsets(xyz, 4).size());
     }
 }
