@@ -90,8 +90,10 @@ public interface Drive {
             throw InvalidInputException.of(Reason.OUT_OF_RANGE, "end", "end > start = " + start, end);
         }
         Drive self = this;
+        // the drive is zero outside the window, so breakpoints outside it are not breakpoints of the result
+        double[] inside = Arrays.stream(breakpoints()).filter(b -> b > start && b < end).toArray();
         return Drives.make(t -> t >= start && t < end ? self.at(t) : 0.0,
-                Drives.merge(breakpoints(), new double[]{start, end}),
+                Drives.merge(inside, new double[]{start, end}),
                 name() + " on [" + fmt(start) + ", " + fmt(end) + ")", isPiecewiseConstant());
     }
 
@@ -149,7 +151,10 @@ public interface Drive {
         Require.nonNull(values, "values");
         Require.finite(times, "times");
         Require.finite(values, "values");
-        if (values.length == 0 || times.length != values.length + 1) {
+        if (values.length == 0) {
+            throw InvalidInputException.of(Reason.EMPTY, "values", "at least one segment value", "none");
+        }
+        if (times.length != values.length + 1) {
             throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "times", "values.length + 1 = " + (values.length + 1)
                     + " increasing times (values non-empty)", times.length + " times");
         }
@@ -197,9 +202,13 @@ public interface Drive {
         Require.nonNull(values, "values");
         Require.finite(times, "times");
         Require.finite(values, "values");
-        if (times.length < 3 || values.length != times.length) {
+        if (times.length < 3) {
+            throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "times", "at least 3 knots",
+                    times.length + " times");
+        }
+        if (values.length != times.length) {
             throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "values",
-                    "as many values as times, at least 3", times.length + " times and " + values.length + " values");
+                    "as many values as times (" + times.length + ")", values.length + " values");
         }
         for (int k = 1; k < times.length; k++) {
             if (!(times[k] > times[k - 1])) {
@@ -233,11 +242,12 @@ final class Drives {
 
     static double[] merge(double[] a, double[] b) {
         TreeSet<Double> s = new TreeSet<>();
+        // + 0.0 maps −0.0 to 0.0: TreeSet orders them as distinct values, which would make a zero-length segment
         for (double x : a) {
-            s.add(x);
+            s.add(x + 0.0);
         }
         for (double x : b) {
-            s.add(x);
+            s.add(x + 0.0);
         }
         double[] out = new double[s.size()];
         int k = 0;

@@ -1,0 +1,2 @@
+/** Implementation of the validation module: tables, plotting helpers. Not API. */
+package org.liepath.validation.internal;
