@@ -46,6 +46,10 @@ import java.util.List;
 public final class PauliAlgebra {
     /** Size limit of {@link #generatedBy(List)}: 65 536 elements. */
     public static final int DEFAULT_MAX_DIMENSION = 1 << 16;
+    /** Largest number of qubits for which {@link #type()} of a basis of sums is taken from the dense algebra. */
+    public static final int DENSE_TYPE_QUBITS = 5;
+    /** Largest dimension for which {@link #type()} of a basis of sums is taken from the dense algebra. */
+    public static final int DENSE_TYPE_DIMENSION = 256;
 
     private final int qubits;
     private final List<PauliSum> basis;
@@ -246,24 +250,38 @@ public final class PauliAlgebra {
     /**
      * The isomorphism type, where it can be certified, else {@code "unknown"}.
      *
-     * <p>Recognised: algebras with a basis of Pauli strings ({@link #isStringBasis()}). Their strings split into the
-     * connected components of the anticommutation graph; each component spans an ideal. An isolated string is a
-     * u(1) of the centre. For a larger component (semisimple: no string in it commutes with all the others) the
-     * rank is the size of a maximal commuting subset, which spans a maximal torus (its centraliser is itself); the
-     * component is all of su(2^k) when it holds all 4^k − 1 non-identity strings on its k-qubit support; otherwise
-     * every compact semisimple algebra of that dimension and rank is enumerated, and candidates are kept only if the
-     * number of strings anticommuting with each basis string (the rank of ad_P, whose eigenvalues are 0, ±2i) is
-     * possible for them. A component is named only when exactly one candidate survives; G2, F4, E8 cannot occur
-     * (they have no such grading element). Names: su(n), so(n), sp(2m) (the compact symplectic algebra of 2m × 2m
-     * matrices, rank m), e6, e7, u(1), joined by " ⊕ " with the largest factors first.
+     * <p>Algebras with a basis of Pauli strings ({@link #isStringBasis()}) are identified exactly, with no
+     * floating point: the centre is spanned by the strings commuting with every generator (one u(1) each); a maximal
+     * commuting set of basis strings spans a Cartan subalgebra (its centraliser is itself); the roots are computed
+     * exactly as sign vectors on that set (from the orbits of the other strings under multiplication by it); the
+     * simple ideals are the irreducible components of the root system, each named from its number of roots, rank
+     * and root lengths. This covers every compact simple type, including the free-fermion so(2n), su(2^k) and the
+     * so / sp families, with B_m and C_m told apart by their root lengths. Up to {@value
+     * org.liepath.algebra.internal.StringTypes#MAX_ROOTS} roots (dimension minus rank), and su(2^k) of any size when
+     * the algebra holds every non-identity string on its support. Names: su(n), so(n), sp(2m) (the compact
+     * symplectic algebra of 2m × 2m matrices, rank m), e6, e7, e8, f4, g2, with the low-dimensional coincidences
+     * written su(2), so(5), su(4) and so(4) as su(2) ⊕ su(2); simple factors are listed largest first, then the
+     * centre as u(1) or u(1)^k; the zero algebra is "0". Cost: about d·(k + r) string operations for dimension d,
+     * k generators and rank r, plus modular elimination of length r for the roots until a basis is found.
      *
-     * <p>Not recognised ("unknown"): bases that are not single strings, components whose (dimension, rank) fits
-     * more than one algebra after the test above, and components too large for the enumeration.
+     * <p>Other bases (sums) on at most {@value #DENSE_TYPE_QUBITS} qubits with dimension at most
+     * {@value #DENSE_TYPE_DIMENSION}: the type that {@link LieAlgebra#type()} finds for the dense matrices (a
+     * numerical decomposition; see there). Anything else: {@code "unknown"}.
      */
     public String type() {
         String t = type;
         if (t == null) {
-            t = stringBasis ? StringTypes.identify(stringTable(), result.pivots == null ? result.generators : basis.size()) : "unknown";
+            if (stringBasis) {
+                t = StringTypes.identify(stringTable(), result.pivots == null ? result.generators : basis.size());
+            } else if (qubits <= DENSE_TYPE_QUBITS && basis.size() <= DENSE_TYPE_DIMENSION) {
+                List<org.liepath.core.Operator> ops = new ArrayList<>(basis.size());
+                for (PauliSum s : basis) {
+                    ops.add(s.toOperator());
+                }
+                t = LieAlgebra.spannedBy(ops).type();
+            } else {
+                t = "unknown";
+            }
             type = t;
         }
         return t;
