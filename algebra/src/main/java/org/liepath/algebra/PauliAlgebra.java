@@ -52,7 +52,8 @@ public final class PauliAlgebra {
     public static final int DENSE_TYPE_DIMENSION = 256;
 
     private final int qubits;
-    private final List<PauliSum> basis;
+    /** null for a string algebra until first asked for (built from the table; a benign race) */
+    private volatile List<PauliSum> basis;
     private final boolean stringBasis;
     private final PauliClosure.Result result;
     private volatile String type;
@@ -155,16 +156,20 @@ public final class PauliAlgebra {
     }
 
     private static PauliAlgebra fromStrings(int q, PauliClosure.Result r) {
-        PauliString[] s = new PauliString[r.table.size()];
+        return new PauliAlgebra(q, null, true, r);
+    }
+
+    private List<PauliSum> stringsAsBasis() {
+        PauliString[] s = new PauliString[result.table.size()];
         for (int k = 0; k < s.length; k++) {
-            s[k] = string(q, r.table, k);
+            s[k] = string(qubits, result.table, k);
         }
         Arrays.sort(s);
         List<PauliSum> b = new ArrayList<>(s.length);
         for (PauliString p : s) {
             b.add(PauliSum.of(p));
         }
-        return new PauliAlgebra(q, Collections.unmodifiableList(b), true, r);
+        return Collections.unmodifiableList(b);
     }
 
     private static PauliAlgebra fromRows(int q, PauliClosure.Result r) {
@@ -202,12 +207,17 @@ public final class PauliAlgebra {
 
     /** @return the real dimension of the algebra */
     public int dimension() {
-        return basis.size();
+        return result.pivots == null ? result.table.size() : result.pivots.length;
     }
 
     /** @return the basis sums H (the algebra is spanned by the −iH), in reduced echelon form over strings */
     public List<PauliSum> basis() {
-        return basis;
+        List<PauliSum> b = basis;
+        if (b == null) {
+            b = stringsAsBasis();
+            basis = b;
+        }
+        return b;
     }
 
     /** @return true when every basis element is a single Pauli string */
@@ -272,10 +282,10 @@ public final class PauliAlgebra {
         String t = type;
         if (t == null) {
             if (stringBasis) {
-                t = StringTypes.identify(stringTable(), result.pivots == null ? result.generators : basis.size());
-            } else if (qubits <= DENSE_TYPE_QUBITS && basis.size() <= DENSE_TYPE_DIMENSION) {
-                List<org.liepath.core.Operator> ops = new ArrayList<>(basis.size());
-                for (PauliSum s : basis) {
+                t = StringTypes.identify(stringTable(), result.pivots == null ? result.generators : dimension());
+            } else if (qubits <= DENSE_TYPE_QUBITS && dimension() <= DENSE_TYPE_DIMENSION) {
+                List<org.liepath.core.Operator> ops = new ArrayList<>(dimension());
+                for (PauliSum s : basis()) {
                     ops.add(s.toOperator());
                 }
                 t = LieAlgebra.spannedBy(ops).type();
@@ -294,7 +304,7 @@ public final class PauliAlgebra {
         StringTable t = new StringTable(PauliString.words(qubits));
         int w = PauliString.words(qubits);
         long[] buf = new long[2 * w];
-        for (PauliSum s : basis) {
+        for (PauliSum s : basis()) {
             put(buf, 0, s.stringAt(0), w);
             t.intern(buf, 0);
         }
