@@ -137,6 +137,20 @@ class PauliAlgebraSumsTest {
         assertTrue(a.contains(PauliSum.zero(2)));
     }
 
+    // su(2) from the sums X + Y and Z (Pauli algebra, common practice): the elimination ends on single strings, so
+    // the exact string identification applies; a large algebra of sums is not named.
+    @Test
+    void typesOfSumAlgebras() {
+        PauliAlgebra su2 = PauliAlgebra.generatedBy(List.of(PauliSum.parse("X + Y"), PauliSum.parse("Z")));
+        assertEquals(3, su2.dimension());
+        assertTrue(su2.isStringBasis());
+        assertEquals("su(2)", su2.type());
+        assertEquals(List.of(PauliSum.of("X"), PauliSum.of("Y"), PauliSum.of("Z")), su2.basis());
+        PauliAlgebra big = PauliAlgebra.generatedBy(SpinChains.isingSummed(8, true));
+        assertFalse(big.isStringBasis());
+        assertEquals("unknown", big.type());
+    }
+
     static List<PauliSum> randomGenerators(Random r, int n) {
         List<PauliSum> gens = new ArrayList<>();
         int m = 1 + r.nextInt(3);
