@@ -8,6 +8,7 @@ import org.liepath.core.Hamiltonian;
 import org.liepath.core.Lindbladian;
 import org.liepath.core.Operator;
 import org.liepath.core.Pauli;
+import org.liepath.core.Spin;
 import org.liepath.core.StateVector;
 import org.liepath.core.Superoperator;
 
@@ -262,6 +263,32 @@ class EvolveRunTest {
         assertTrue(chan.minEigenvalue() > -1e-9, "Choi minimum " + chan.minEigenvalue());
         assertThrows(IllegalStateException.class, dens::propagator);
         assertThrows(IllegalStateException.class, dens::coordinates);
+    }
+
+    /**
+     * Wei–Norman runs are routed to the chart's coordinate integrator and wrapped: the propagator agrees with a
+     * Magnus 6 run at the tolerance, coordinates are available, and misuse is refused.
+     */
+    @Test
+    void weiNormanRunsAreRoutedToTheChart() {
+        Hamiltonian h = Fixtures.drivenQubit();
+        WeiNorman chart = WeiNorman.of(List.of(Spin.of(0.5).plus(), Spin.of(0.5).z(), Spin.of(0.5).minus()));
+        Evolution wn = Evolve.of(h).over(0, 2).scheme(Scheme.weiNorman(chart)).tolerance(1e-11).sampleAt(1.0).run();
+        assertTrue(wn.status().isSuccess(), wn.status().toString());
+        Operator ref = Evolve.of(h).over(0, 2).scheme(Scheme.magnus6()).tolerance(1e-12).run().propagator();
+        assertEquals(0.0, wn.propagator().distance(ref), 1e-8);
+        assertEquals(3, wn.coordinates().last().length);
+        assertTrue(wn.stats().charts() >= 1);
+        assertTrue(Double.isNaN(wn.errorEstimate()));
+        StateVector psi = Evolve.of(h).over(0, 2).scheme(Scheme.weiNorman(chart)).tolerance(1e-11)
+                .state(StateVector.basis(2, 0)).run().state();
+        assertEquals(0.0, psi.distance(StateVector.basis(2, 0).apply(ref)), 1e-8);
+        assertThrows(IllegalStateException.class, () -> Evolve.of(h).over(0, 1).run().coordinates());
+        Lindbladian l = Lindbladian.builder(h).jump(0.1, Pauli.string("Z")).build();
+        EvolveInputTest.refused(org.liepath.core.InvalidInputException.Reason.UNSUPPORTED, "scheme",
+                "Hamiltonians only", () -> Evolve.of(l).over(0, 1).scheme(Scheme.weiNorman(chart)).run());
+        EvolveInputTest.refused(org.liepath.core.InvalidInputException.Reason.UNSUPPORTED, "steps",
+                "10 fixed steps", () -> Evolve.of(h).over(0, 1).scheme(Scheme.weiNorman(chart)).steps(10).run());
     }
 
     @Test
