@@ -323,7 +323,19 @@ public final class Chart {
                 continue;
             }
             factor[k].eval(zr, zi, w.facR, w.facI, w.bigExp, w.scR, w.scI);
-            Dense.mul(n, w.accR, w.accI, w.facR, w.facI, w.tmpR, w.tmpI);
+            if (factor[k].isDiagonal()) {
+                // a diagonal factor scales columns: O(N²) instead of a product
+                for (int i = 0; i < n; i++) {
+                    for (int j = 0; j < n; j++) {
+                        double ar = w.accR[i * n + j], ai = w.accI[i * n + j];
+                        double dr = w.facR[j * n + j], di = w.facI[j * n + j];
+                        w.tmpR[i * n + j] = ar * dr - ai * di;
+                        w.tmpI[i * n + j] = ar * di + ai * dr;
+                    }
+                }
+            } else {
+                Dense.mul(n, w.accR, w.accI, w.facR, w.facI, w.tmpR, w.tmpI);
+            }
             double[] s = w.accR;
             w.accR = w.tmpR;
             w.tmpR = s;
