@@ -317,6 +317,7 @@ public final class Chart {
             }
         }
         Dense.identity(n, w.accR, w.accI);
+        boolean first = true;
         for (int k = 0; k < m; k++) {
             double zr = g[2 * k], zi = g[2 * k + 1];
             if (zr == 0 && zi == 0) {
@@ -333,9 +334,14 @@ public final class Chart {
                         w.tmpI[i * n + j] = ar * di + ai * dr;
                     }
                 }
+            } else if (first) {
+                // the accumulated product is still the identity: take the factor as it is
+                System.arraycopy(w.facR, 0, w.tmpR, 0, len);
+                System.arraycopy(w.facI, 0, w.tmpI, 0, len);
             } else {
-                Dense.mul(n, w.accR, w.accI, w.facR, w.facI, w.tmpR, w.tmpI);
+                Small.mulLarge(n, w.accR, w.accI, w.facR, w.facI, w.tmpR, w.tmpI);
             }
+            first = false;
             double[] s = w.accR;
             w.accR = w.tmpR;
             w.tmpR = s;

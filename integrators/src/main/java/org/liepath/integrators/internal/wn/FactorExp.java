@@ -296,7 +296,7 @@ public final class FactorExp {
                         si[i * n + k] = a * ci + b * cr;
                     }
                 }
-                org.liepath.core.internal.Dense.mul(n, sr, si, vhr, vhi, outR, outI);
+                Small.mulLarge(n, sr, si, vhr, vhi, outR, outI);
                 return;
             default:
                 for (int e = 0; e < len; e++) {
