@@ -142,6 +142,32 @@ public final class FactorExp {
         return kind != Kind.GENERAL;
     }
 
+    /** @return true if X was diagonalised once: exp(zX) = V diag(e^{zμ}) V† */
+    public boolean isNormal() {
+        return kind == Kind.NORMAL;
+    }
+
+    /** NORMAL kind: the eigenvector matrix V (planar; not to be modified). */
+    double[][] eigenvectors() {
+        return new double[][]{vr, vi};
+    }
+
+    /** NORMAL kind: V† (planar; not to be modified). */
+    double[][] eigenvectorsDagger() {
+        return new double[][]{vhr, vhi};
+    }
+
+    /** NORMAL kind: d_k = e^{zμ_k} into (dr, di), length N. */
+    void spectralFactors(double zr, double zi, double[] dr, double[] di) {
+        for (int k = 0; k < n; k++) {
+            double ar = hermitian ? zr * lam[k] : zi * lam[k];
+            double ai = hermitian ? zi * lam[k] : -zr * lam[k];
+            double e = Math.exp(ar);
+            dr[k] = e * Math.cos(ai);
+            di[k] = e * Math.sin(ai);
+        }
+    }
+
     /** @return true if X is diagonal (exp(zX) acts by scaling columns) */
     public boolean isDiagonal() {
         return kind == Kind.DIAGONAL;
