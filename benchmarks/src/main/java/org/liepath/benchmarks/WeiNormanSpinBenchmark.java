@@ -21,8 +21,9 @@ import org.openjdk.jmh.results.RunResult;
 import org.openjdk.jmh.runner.Runner;
 import org.openjdk.jmh.runner.options.Options;
 import org.openjdk.jmh.runner.options.OptionsBuilder;
+import org.openjdk.jmh.runner.options.TimeValue;
 
-import java.util.Collection;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
@@ -70,16 +71,26 @@ public class WeiNormanSpinBenchmark {
         return Evolve.of(h).over(0, T).scheme(Scheme.commutatorFree4Opt()).tolerance(TOL).run().propagator();
     }
 
-    /** Runs both benchmarks and prints time ratios and the difference of the two propagators per j. */
+    /**
+     * Runs both benchmarks and prints time ratios and the difference of the two propagators per j. j = 5 and 25 run
+     * as average-time measurements; j = 100, whose full-dimension run takes minutes, as single shots (one for the
+     * full run, three for Wei–Norman).
+     */
     public static void main(String[] args) throws Exception {
-        Options opt = new OptionsBuilder().include(WeiNormanSpinBenchmark.class.getSimpleName())
-                .forks(1).warmupIterations(2).measurementIterations(3).warmupTime(org.openjdk.jmh.runner.options
-                        .TimeValue.seconds(1)).measurementTime(org.openjdk.jmh.runner.options.TimeValue.seconds(2))
+        String name = WeiNormanSpinBenchmark.class.getSimpleName();
+        Options small = new OptionsBuilder().include(name).param("j", "5", "25").forks(1).warmupIterations(2)
+                .measurementIterations(3).warmupTime(TimeValue.seconds(1)).measurementTime(TimeValue.seconds(2))
                 .build();
-        Collection<RunResult> results = new Runner(opt).run();
-        Map<String, double[]> byJ = new TreeMap<>();
+        Options bigWn = new OptionsBuilder().include(name + ".weiNorman").param("j", "100").forks(1)
+                .mode(Mode.SingleShotTime).warmupIterations(1).measurementIterations(3).build();
+        Options bigFull = new OptionsBuilder().include(name + ".fullCommutatorFree").param("j", "100").forks(1)
+                .mode(Mode.SingleShotTime).warmupIterations(0).measurementIterations(1).build();
+        List<RunResult> results = new ArrayList<>(new Runner(small).run());
+        results.addAll(new Runner(bigWn).run());
+        results.addAll(new Runner(bigFull).run());
+        Map<Double, double[]> byJ = new TreeMap<>();
         for (RunResult r : results) {
-            String jj = r.getParams().getParam("j");
+            double jj = Double.parseDouble(r.getParams().getParam("j"));
             double score = r.getPrimaryResult().getScore();
             double[] pair = byJ.computeIfAbsent(jj, k -> new double[2]);
             if (r.getParams().getBenchmark().endsWith("weiNorman")) {
@@ -88,14 +99,14 @@ public class WeiNormanSpinBenchmark {
                 pair[1] = score;
             }
         }
-        for (Map.Entry<String, double[]> e : byJ.entrySet()) {
+        for (Map.Entry<Double, double[]> e : byJ.entrySet()) {
             WeiNormanSpinBenchmark b = new WeiNormanSpinBenchmark();
-            b.j = Double.parseDouble(e.getKey());
+            b.j = e.getKey();
             b.setup();
             Evolution w = Evolve.of(b.h).over(0, T).scheme(Scheme.weiNorman(b.chart)).tolerance(TOL).run();
             Evolution f = Evolve.of(b.h).over(0, T).scheme(Scheme.commutatorFree4Opt()).tolerance(TOL).run();
-            System.out.printf("j = %s: Wei–Norman %.4f ms, full CF4:3Opt %.2f ms, ratio %.1f×, charts %d, "
-                            + "|U_wn − U_full|max = %.2e%n", e.getKey(), e.getValue()[0], e.getValue()[1],
+            System.out.printf("j = %s: Wei–Norman %.3f ms, full CF4:3Opt %.1f ms, ratio %.1f×, charts %d, "
+                            + "‖U_wn − U_full‖_F = %.2e%n", e.getKey(), e.getValue()[0], e.getValue()[1],
                     e.getValue()[1] / e.getValue()[0], w.stats().charts(),
                     w.propagator().minus(f.propagator()).norm());
         }

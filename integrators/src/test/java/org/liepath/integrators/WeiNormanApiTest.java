@@ -160,6 +160,25 @@ class WeiNormanApiTest {
     }
 
     @Test
+    void backwardRunsCancellationAndSamples() {
+        Spin s = Spin.of(1);
+        WeiNorman chart = WeiNorman.of(List.of(s.plus(), s.z(), s.minus()));
+        Hamiltonian h = Hamiltonian.builder(3).term(0.7, s.z()).term(s.x(), Drive.cosine(0.9, 1.1, 0)).build();
+        Evolution fwd = WnTesting.wn(chart, h, 0, 2, 1e-12);
+        Evolution back = WnTesting.wn(chart, h, 2, 0, 1e-12);
+        // U(0, 2) = U(2, 0)^{-1} = U(2, 0)† (common practice)
+        assertTrue(WnTesting.maxDiff(fwd.propagator().dagger(), back.propagator()) < 1e-9);
+        Evolution cancelled = Evolve.of(h).over(0, 2).scheme(Scheme.weiNorman(chart)).monitor((f, c) -> false).run();
+        assertTrue(!cancelled.status().isSuccess());
+        // sample times: coordinates and (re-anchored) propagators recorded in order, the end time last
+        CoordinateRun run = chart.integrate(h, 0, 2, 1e-12, new double[]{0.5, 1.0, 1.5}, (f, c) -> true);
+        assertEquals(4, run.coordinates.size());
+        assertEquals(4, run.propagators.size());
+        assertEquals(2.0, run.times[3]);
+        assertTrue(WnTesting.maxDiff(WnTesting.reference(h, 0, 1.0), run.propagators.get(1)) < 1e-9);
+    }
+
+    @Test
     void badInput() {
         // non-closed: −iσx/2, −iσy/2 bracket to −iσz/2
         Operator ax = Pauli.x().timesI().scale(-0.5), ay = Pauli.y().timesI().scale(-0.5);
