@@ -18,7 +18,6 @@ import org.liepath.integrators.WeiNorman;
 import org.liepath.validation.internal.TextTable;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -179,6 +178,13 @@ public final class Demo {
                     .append(").");
         }
         rep.paragraph(alg.toString());
+        if (chart != null) {
+            String eqs = chart.equations(h).render();
+            if (eqs.length() <= 4000) {
+                rep.paragraph("Coordinate equations of the proposed chart (as rendered by the library):");
+                rep.preformatted(eqs);
+            }
+        }
 
         // 2. cross-check of schemes
         log.accept("[2/7] Cross-check of schemes against the reference integrator");
@@ -318,12 +324,7 @@ public final class Demo {
         Evolution dens = Evolve.of(l).over(0, T).tolerance(1e-10).density(psi0.toDensity()).sampleAt(times)
                 .monitor(progress(log, "density")).run();
         Trajectory dt = dens.trajectory();
-        List<Operator> rhos = new ArrayList<>(dt.size());
-        for (int k = 0; k < dt.size(); k++) {
-            Operator r = dt.density(k);
-            rhos.add(r.plus(r.dagger()).scale(0.5));
-        }
-        double[] purity = Fidelity.purity(rhos), entropy = Fidelity.entropy(rhos);
+        double[] purity = Fidelity.purity(dt), entropy = Fidelity.entropy(dt);
         fig.put("final purity", fix(purity[purity.length - 1]));
         fig.put("final entropy", fix(entropy[entropy.length - 1]));
         Report.Plot pe = Report.plot("purity-entropy.png", "Open system from |01⟩: purity and entropy", "t",
