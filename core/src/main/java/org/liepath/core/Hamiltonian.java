@@ -63,9 +63,12 @@ public final class Hamiltonian {
     /**
      * Fills {@code out[k] = c_k(t)}.
      *
+     * @throws InvalidInputException if t is not finite or out is null or shorter than {@link #size()}
      * @throws DriveException if a drive throws or returns a non-finite value (names the drive, term and time)
      */
     public void coefficients(double t, double[] out) {
+        // a NaN time would otherwise be blamed on the first drive that returns NaN for it
+        Require.finite(t, "t");
         if (out == null || out.length < drives.size()) {
             Require.nonNull(out, "out");
             throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "out", "length >= " + drives.size(),

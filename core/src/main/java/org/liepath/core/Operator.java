@@ -15,7 +15,8 @@ import java.util.Locale;
  *
  * <p>Storage is planar and row-major (entry (i, j) is {@code re(i,j) + i·im(i,j)}); every operation returns a new
  * operator and never modifies its inputs. Factories copy the caller's arrays. Entries are always finite: factories
- * refuse NaN and infinities with an {@link InvalidInputException}.
+ * refuse NaN and infinities with an {@link InvalidInputException}, and the arithmetic methods throw one (reason
+ * NOT_FINITE) when a result overflows.
  *
  * <p>Cost: {@link #times} and {@link #commutator} are O(n³) (8n³ flops per product), {@link #exp} is about
  * 6 products and one LU solve plus log₂‖A‖₁ squarings, {@link #kron} is O(n²m²). Intended sizes: 1 … a few hundred.
@@ -260,7 +261,7 @@ public final class Operator {
             r[k] = re[k] + b.re[k];
             i[k] = im[k] + b.im[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "b", "sum");
     }
 
     /** @return this − b */
@@ -271,7 +272,7 @@ public final class Operator {
             r[k] = re[k] - b.re[k];
             i[k] = im[k] - b.im[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "b", "difference");
     }
 
     /** @return the matrix product this·b */
@@ -279,7 +280,7 @@ public final class Operator {
         same(b, "b");
         double[] r = new double[n * n], i = new double[n * n];
         Dense.mul(n, re, im, b.re, b.im, r, i);
-        return new Operator(n, r, i);
+        return checked(n, r, i, "b", "product");
     }
 
     /** @return s·this */
@@ -290,7 +291,7 @@ public final class Operator {
             r[k] = s * re[k];
             i[k] = s * im[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "s", "multiple");
     }
 
     /** @return z·this */
@@ -302,7 +303,7 @@ public final class Operator {
             r[k] = zr * re[k] - zi * im[k];
             i[k] = zr * im[k] + zi * re[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "z", "multiple");
     }
 
     /** @return i·this (exact, no rounding) */
@@ -358,7 +359,7 @@ public final class Operator {
             r1[k] -= r2[k];
             i1[k] -= i2[k];
         }
-        return new Operator(n, r1, i1);
+        return checked(n, r1, i1, "b", "commutator");
     }
 
     /** @return the anticommutator {this, b} = this·b + b·this */
@@ -371,7 +372,7 @@ public final class Operator {
             r1[k] += r2[k];
             i1[k] += i2[k];
         }
-        return new Operator(n, r1, i1);
+        return checked(n, r1, i1, "b", "anticommutator");
     }
 
     /** @return the trace */
@@ -398,7 +399,7 @@ public final class Operator {
 
     /** @return the Frobenius (Hilbert–Schmidt) norm sqrt(tr(A†A)) */
     public double norm() {
-        return Dense.frobenius(n * n, re, im);
+        return safeNorm(re, im);
     }
 
     /** @return the matrix 1-norm (maximum column sum of moduli) */
@@ -414,7 +415,15 @@ public final class Operator {
             double dr = re[k] - b.re[k], di = im[k] - b.im[k];
             s += dr * dr + di * di;
         }
-        return Math.sqrt(s);
+        if (inRange(s)) {
+            return Math.sqrt(s);
+        }
+        Ssq q = new Ssq();
+        for (int k = 0; k < n * n; k++) {
+            q.add(0.5 * re[k] - 0.5 * b.re[k]);
+            q.add(0.5 * im[k] - 0.5 * b.im[k]);
+        }
+        return 2 * q.value();
     }
 
     /**
@@ -437,7 +446,17 @@ public final class Operator {
                 s += dr * dr + di * di;
             }
         }
-        return Math.sqrt(s);
+        if (inRange(s)) {
+            return Math.sqrt(s);
+        }
+        Ssq q = new Ssq();
+        for (int a = 0; a < n; a++) {
+            for (int b = 0; b < n; b++) {
+                q.add(0.5 * re[a * n + b] - 0.5 * re[b * n + a]);
+                q.add(0.5 * im[a * n + b] + 0.5 * im[b * n + a]);
+            }
+        }
+        return 2 * q.value();
     }
 
     /** @return the Kronecker product this ⊗ b (this is the left, slower-varying factor) */
@@ -465,7 +484,7 @@ public final class Operator {
                 }
             }
         }
-        return new Operator(nm, r, i);
+        return checked(nm, r, i, "b", "Kronecker product");
     }
 
     /**
@@ -621,22 +640,97 @@ public final class Operator {
         if (k < 0) {
             throw InvalidInputException.of(Reason.OUT_OF_RANGE, "k", "a non-negative exponent", k);
         }
-        Operator result = identity(n), base = this;
+        int len = n * n;
+        double[] rr = new double[len], ri = new double[len], br = re.clone(), bi = im.clone();
+        double[] tr = new double[len], ti = new double[len];
+        for (int q = 0; q < n; q++) {
+            rr[q * n + q] = 1;
+        }
         for (int e = k; e > 0; e >>= 1) {
             if ((e & 1) != 0) {
-                result = result.times(base);
+                Dense.mul(n, rr, ri, br, bi, tr, ti);
+                System.arraycopy(tr, 0, rr, 0, len);
+                System.arraycopy(ti, 0, ri, 0, len);
             }
             if (e > 1) {
-                base = base.times(base);
+                Dense.mul(n, br, bi, br, bi, tr, ti);
+                System.arraycopy(tr, 0, br, 0, len);
+                System.arraycopy(ti, 0, bi, 0, len);
             }
         }
-        for (int q = 0; q < n * n; q++) {
-            if (!Double.isFinite(result.re[q]) || !Double.isFinite(result.im[q])) {
+        for (int q = 0; q < len; q++) {
+            if (!Double.isFinite(rr[q]) || !Double.isFinite(ri[q])) {
                 throw InvalidInputException.of(Reason.NOT_FINITE, "k", "a power whose entries are finite",
                         k + " (overflow, ‖A‖₁ = " + norm1() + ")");
             }
         }
-        return result;
+        return new Operator(n, rr, ri);
+    }
+
+    /**
+     * Wraps a result after checking it is finite: finite inputs can still overflow, and the class promises finite
+     * entries (an O(n²) scan, small next to the work that produced the result).
+     */
+    private static Operator checked(int n, double[] r, double[] i, String argument, String what) {
+        for (int k = 0; k < r.length; k++) {
+            if (!Double.isFinite(r[k]) || !Double.isFinite(i[k])) {
+                throw InvalidInputException.of(Reason.NOT_FINITE, argument, "operands whose " + what + " is finite",
+                        "an overflow at entry (" + k / n + ", " + k % n + ")");
+            }
+        }
+        return new Operator(n, r, i);
+    }
+
+    /**
+     * Whether a plain sum of squares can be trusted: finite (no overflow) and large enough that its dominant terms
+     * were normal numbers (entries below ~1e-154 square to subnormals or zero).
+     */
+    static boolean inRange(double sumOfSquares) {
+        // a zero sum may hide non-zero entries whose squares underflowed, so it takes the scaled pass too
+        return sumOfSquares < Double.POSITIVE_INFINITY && sumOfSquares > 1e-290;
+    }
+
+    /**
+     * sqrt(Σ re² + im²) without overflow or underflow: the plain sum when it is in range, else a scaled pass
+     * (the scale-and-sum update of the reference BLAS dnrm2; S. J. Hammarling, 1979 — common practice).
+     */
+    static double safeNorm(double[] re, double[] im) {
+        double s = 0;
+        for (int k = 0; k < re.length; k++) {
+            s += re[k] * re[k] + im[k] * im[k];
+        }
+        if (inRange(s)) {
+            return Math.sqrt(s);
+        }
+        Ssq q = new Ssq();
+        for (int k = 0; k < re.length; k++) {
+            q.add(re[k]);
+            q.add(im[k]);
+        }
+        return q.value();
+    }
+
+    /** Scaled sum of squares: value() = scale·sqrt(sum) = sqrt(Σ x²) for the numbers added. */
+    static final class Ssq {
+        private double scale = 0, sum = 1;
+
+        void add(double x) {
+            if (x != 0) {
+                double a = Math.abs(x);
+                if (scale < a) {
+                    double r = scale / a;
+                    sum = 1 + sum * r * r;
+                    scale = a;
+                } else {
+                    double r = a / scale;
+                    sum += r * r;
+                }
+            }
+        }
+
+        double value() {
+            return scale * Math.sqrt(sum);
+        }
     }
 
     private static void checkDim(int n, String name) {

@@ -96,7 +96,7 @@ public final class StateVector {
 
     /** @return the Euclidean norm */
     public double norm() {
-        return Dense.frobenius(re.length, re, im);
+        return Operator.safeNorm(re, im);
     }
 
     /** @return this vector divided by its norm */
@@ -105,7 +105,13 @@ public final class StateVector {
         if (s == 0) {
             throw InvalidInputException.of(Reason.OUT_OF_RANGE, "this", "a non-zero vector", "the zero vector");
         }
-        return scale(1 / s);
+        // divide rather than multiply by 1/s, which overflows for norms below ~1e-308
+        double[] r = new double[re.length], i = new double[re.length];
+        for (int k = 0; k < re.length; k++) {
+            r[k] = re[k] / s;
+            i[k] = im[k] / s;
+        }
+        return new StateVector(r, i);
     }
 
     /** @return s·ψ */
@@ -171,7 +177,15 @@ public final class StateVector {
             double dr = re[k] - b.re[k], di = im[k] - b.im[k];
             s += dr * dr + di * di;
         }
-        return Math.sqrt(s);
+        if (Operator.inRange(s)) {
+            return Math.sqrt(s);
+        }
+        Operator.Ssq q = new Operator.Ssq();
+        for (int k = 0; k < re.length; k++) {
+            q.add(0.5 * re[k] - 0.5 * b.re[k]);
+            q.add(0.5 * im[k] - 0.5 * b.im[k]);
+        }
+        return 2 * q.value();
     }
 
     /** Exact componentwise equality (0.0 equals −0.0; use {@link #distance} for approximate comparison). */

@@ -397,6 +397,44 @@ public final class Superoperator {
         return new Operator(n, r, im);
     }
 
+    /**
+     * The map whose Choi matrix is j (the inverse of {@link #choi()}): S[i + n j', a + n b] = J[a n + i, b n + j'].
+     *
+     * @throws InvalidInputException if j is null or its dimension is not a perfect square
+     */
+    public static Superoperator ofChoi(Operator j) {
+        Require.nonNull(j, "j");
+        int n = (int) Math.round(Math.sqrt(j.dim())), nn = n * n;
+        if (nn != j.dim()) {
+            throw InvalidInputException.of(InvalidInputException.Reason.DIMENSION_MISMATCH, "j", "an n²×n² matrix",
+                    j.dim() + "x" + j.dim());
+        }
+        double[] r = new double[nn * nn], im = new double[nn * nn];
+        for (int a = 0; a < n; a++) {
+            for (int b = 0; b < n; b++) {
+                for (int i = 0; i < n; i++) {
+                    for (int k = 0; k < n; k++) {
+                        int src = (a * n + i) * nn + b * n + k, dst = (i + n * k) * nn + a + n * b;
+                        r[dst] = j.re[src];
+                        im[dst] = j.im[src];
+                    }
+                }
+            }
+        }
+        return new Superoperator(n, new Operator(nn, r, im));
+    }
+
+    /** Exact equality of the matrices (numeric, so 0.0 equals −0.0); use {@link #distance} to compare approximately. */
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Superoperator && matrix.equals(((Superoperator) o).matrix);
+    }
+
+    @Override
+    public int hashCode() {
+        return matrix.hashCode();
+    }
+
     private static void swap(double[] ar, double[] ai, int nn, int p, int k, boolean rows) {
         if (p == k) {
             return;

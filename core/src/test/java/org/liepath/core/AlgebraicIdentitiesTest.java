@@ -309,4 +309,31 @@ class AlgebraicIdentitiesTest {
         // qubit embedding agrees with Pauli strings
         assertEquals(Pauli.string("IZI"), HilbertSpace.of(2, 2, 2).embed(z, 1));
     }
+
+    @Test
+    void jointEmbeddingPlacesAMultiSubsystemOperator() {
+        // CNOT = |0⟩⟨0| ⊗ I + |1⟩⟨1| ⊗ X (control first; Nielsen & Chuang 2000, §1.3.2 [M]); with control and target
+        // swapped it is I ⊗ |0⟩⟨0| + X ⊗ |1⟩⟨1| = (H⊗H) CNOT (H⊗H) (N&C 2000, exercise 4.20 [M])
+        Operator p0 = Operator.unit(2, 0, 0), p1 = Operator.unit(2, 1, 1), i2 = Operator.identity(2);
+        Operator cnot = p0.kron(i2).plus(p1.kron(X));
+        HilbertSpace two = HilbertSpace.of(2, 2);
+        assertEquals(cnot, two.embed(cnot, 0, 1));
+        assertEquals(i2.kron(p0).plus(X.kron(p1)), two.embed(cnot, 1, 0), "control on qubit 1");
+        Operator had = X.plus(Z).scale(1 / Math.sqrt(2));
+        close(had.kron(had).times(cnot).times(had.kron(had)), two.embed(cnot, 1, 0), 1e-15, "H⊗H CNOT H⊗H");
+        // three qubits, control 2 and target 0: |c⟩ on qubit 2 flips qubit 0
+        HilbertSpace three = HilbertSpace.of(2, 2, 2);
+        Operator g = three.embed(cnot, 2, 0);
+        assertEquals(StateVector.basis(8, 0b101), StateVector.basis(8, 0b001).apply(g));
+        assertEquals(StateVector.basis(8, 0b010), StateVector.basis(8, 0b010).apply(g));
+        // a product operator placed in ascending order equals the explicit Kronecker product
+        java.util.Random r = new java.util.Random(4);
+        HilbertSpace hs = HilbertSpace.of(2, 3, 2);
+        Operator a = org.liepath.testing.Seeds.randomMatrix(r, 2), c = org.liepath.testing.Seeds.randomMatrix(r, 2);
+        Operator b = org.liepath.testing.Seeds.randomMatrix(r, 3);
+        assertEquals(hs.embed(a, 0, c, 2), hs.embed(a.kron(c), 0, 2));
+        assertEquals(hs.embed(a, 0, c, 2), hs.embed(c.kron(a), 2, 0));
+        assertEquals(hs.product(a, b, c), hs.embed(a.kron(b).kron(c), 0, 1, 2));
+        assertEquals(hs.embed(b, 1), hs.embed(b, new int[]{1}));
+    }
 }

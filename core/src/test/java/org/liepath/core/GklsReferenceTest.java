@@ -148,6 +148,23 @@ class GklsReferenceTest {
     }
 
     @Test
+    void choiMatrixDeterminesTheMap() {
+        // Choi–Jamiołkowski: the map ↔ J correspondence is a bijection (Choi 1975); ofChoi inverts choi exactly
+        java.util.Random r = new java.util.Random(21);
+        for (int n = 1; n <= 4; n++) {
+            Superoperator s = Superoperator.ofMatrix(org.liepath.testing.Seeds.randomMatrix(r, n * n));
+            assertEquals(s, Superoperator.ofChoi(s.choi()));
+            assertEquals(s.hashCode(), Superoperator.ofChoi(s.choi()).hashCode());
+        }
+        // the identity channel's Choi matrix is the unnormalised projector onto Σ|aa⟩ (entries 1 at (aa, bb))
+        Operator j = Superoperator.identity(2).choi();
+        Operator omega = StateVector.real(1, 0, 0, 1).toDensity();
+        assertEquals(omega, j);
+        assertEquals(Superoperator.identity(2), Superoperator.ofChoi(omega));
+        assertTrue(!Superoperator.identity(2).equals(Superoperator.identity(2).scale(2)));
+    }
+
+    @Test
     void krausOperatorsRoundTripThroughTheChoiMatrix() {
         double g = 0.45;
         Superoperator ch = Superoperator.kraus(amplitudeDampingKraus(g));
@@ -250,6 +267,50 @@ class GklsReferenceTest {
         // dissipator() is the generator of H = 0
         assertTrue(l.dissipator().distance(Lindbladian.builder(Hamiltonian.constant(Operator.zero(3)))
                 .jump(0.4, Levels.annihilation(3)).jump(0.1, Levels.gellMann(3).get(3)).build().at(0)) <= 0);
+    }
+
+    @Test
+    void superoperatorAlgebraMatchesMapComposition() {
+        java.util.Random r = new java.util.Random(8);
+        Operator a = org.liepath.testing.Seeds.randomMatrix(r, 3), b = org.liepath.testing.Seeds.randomMatrix(r, 3);
+        Operator c = org.liepath.testing.Seeds.randomMatrix(r, 3), d = org.liepath.testing.Seeds.randomMatrix(r, 3);
+        Operator x = org.liepath.testing.Seeds.randomMatrix(r, 3);
+        Superoperator first = Superoperator.sandwich(a, b), second = Superoperator.sandwich(c, d);
+        double tol = 1e-13 * a.norm() * b.norm() * c.norm() * d.norm() * x.norm();
+        // compose: other acts first
+        close(c.times(a).times(x).times(b).times(d), second.compose(first).apply(x), tol, "compose");
+        close(a.times(x).times(b).plus(x.scale(2)), first.plus(Superoperator.identity(3).scale(2)).apply(x),
+                1e-13 * a.norm() * b.norm() * x.norm(), "plus, scale");
+        assertEquals(3, first.dim());
+        assertEquals(9, first.matrix().dim());
+        assertTrue(first.toString().startsWith("Superoperator on 3x3 operators\nOperator 9x9"), first.toString());
+        // exp(tS) of a generator is a semigroup: e^{sS}e^{tS} = e^{(s+t)S}
+        Superoperator gen = Lindbladian.builder(Hamiltonian.constant(Pauli.x().scale(0.4)))
+                .jump(0.5, Operator.unit(2, 0, 1)).build().at(0);
+        assertTrue(gen.exp(0.3).compose(gen.exp(0.9)).distance(gen.exp(1.2)) <= 1e-14);
+        assertTrue(gen.exp().distance(gen.exp(1.0)) <= 0);
+    }
+
+    @Test
+    void timeDependentGeneratorIsTheHamiltonianPartPlusTheDissipator() {
+        Drive pulse = Drive.gaussian(0.8, 1, 0.3);
+        Hamiltonian h = Hamiltonian.builder(2).term(0.5, Pauli.z()).term(Pauli.x(), pulse).build();
+        Lindbladian l = Lindbladian.builder(h).jump(0.2, Operator.unit(2, 0, 1)).jump(0.05, Pauli.z()).build();
+        assertTrue(!l.isTimeIndependent());
+        assertEquals(2, l.dim());
+        assertEquals(List.of(0.2, 0.05), l.rates());
+        assertEquals(List.of(Operator.unit(2, 0, 1), Pauli.z()), l.jumps());
+        assertTrue(l.hamiltonian() == h);
+        assertEquals("Lindbladian (dimension 2, 2 Hamiltonian terms, 2 jumps)", l.toString());
+        for (double t : new double[]{0, 0.7, 1.0, 2.2}) {
+            Operator ht = h.at(t);
+            Superoperator expect = Superoperator.ofMatrix(Lindbladian.hamiltonianPart(ht).plus(l.dissipator().matrix()));
+            assertTrue(expect.distance(l.at(t)) <= 0, "t = " + t);
+            // ρ ↦ −i[H(t), ρ] through the Hamiltonian part
+            Operator rho = rho(0.6, 0.1, 0.2, 0.4);
+            close(ht.commutator(rho).timesI().scale(-1), Superoperator.ofMatrix(Lindbladian.hamiltonianPart(ht)).apply(rho),
+                    1e-15, "−i[H, ρ]");
+        }
     }
 
     @Test

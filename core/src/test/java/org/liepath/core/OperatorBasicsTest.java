@@ -84,6 +84,29 @@ class OperatorBasicsTest {
     }
 
     @Test
+    void normsNeitherOverflowNorUnderflow() {
+        // a plain sum of squares overflows above ~1e154 and underflows below ~1e-154 (Higham 2002, §27.8 [M]);
+        // the expected values are exact up to the rounding of √2
+        double r2 = Math.sqrt(2);
+        assertEquals(r2 * 1e200, Operator.diagonal(1e200, 1e200).norm(), 1e-15 * r2 * 1e200);
+        assertEquals(r2 * 1e-200, Operator.diagonal(1e-200, -1e-200).norm(), 1e-15 * r2 * 1e-200);
+        assertEquals(5e-170, Operator.of(new double[][]{{3e-170}}, new double[][]{{4e-170}}).norm(), 1e-15 * 5e-170);
+        assertEquals(0.0, Operator.zero(3).norm(), 0);
+        assertEquals(2 * r2 * 1e200, Operator.diagonal(1e200, 1e200).distance(Operator.diagonal(-1e200, -1e200)),
+                1e-15 * 2 * r2 * 1e200);
+        assertEquals(2e300, Operator.diagonal(1e300).distance(Operator.diagonal(-1e300)), 1e285);
+        // ‖A − A†‖_F for huge entries, and a huge non-Hermitian matrix is not reported Hermitian
+        Operator upper = Operator.unit(2, 0, 1).scale(1e300);
+        assertEquals(r2 * 1e300, upper.hermitianDefect(), 1e-15 * r2 * 1e300);
+        assertFalse(upper.isHermitian(1e-3));
+        StateVector tiny = StateVector.real(1e-200, 1e-200);
+        assertEquals(r2 * 1e-200, tiny.norm(), 1e-15 * r2 * 1e-200);
+        StateVector unit = StateVector.real(3e-320, 4e-320).normalized(); // subnormal input
+        assertEquals(1.0, unit.norm(), 1e-2, "subnormal components carry few digits");
+        assertEquals(r2 * 1e200, StateVector.real(1e200, 0).distance(StateVector.real(0, -1e200)), 1e-15 * r2 * 1e200);
+    }
+
+    @Test
     void powerOnAKnownMatrix() {
         // [[1,1],[0,1]]^k = [[1,k],[0,1]] and N_3^3 = 0 for the nilpotent Jordan block
         Operator j = Operator.real(new double[][]{{1, 1}, {0, 1}});

@@ -1,6 +1,7 @@
 package org.liepath.integrators.internal;
 
 import org.liepath.core.internal.Expm;
+import org.liepath.core.internal.HermitianExp;
 
 import java.util.Arrays;
 
@@ -16,6 +17,9 @@ public abstract class Kernel {
     protected final LinearSystem sys;
     protected final int m;
     protected final Expm expm;
+    /** Eigen-based exp(−iτK) for anti-Hermitian exponents (Hamiltonian systems), else null. */
+    protected final HermitianExp hexp;
+    private final double[] kr, ki;
     /** Scratch: exponent and exponential (m×m). */
     protected final double[] wr, wi, er, ei;
     /** Scratch state (m×m) for products and for trial steps. */
@@ -36,6 +40,9 @@ public abstract class Kernel {
         this.m = sys.m;
         int len = m * m;
         expm = new Expm(m);
+        hexp = sys.skewHermitian ? new HermitianExp(m) : null;
+        kr = sys.skewHermitian ? new double[len] : null;
+        ki = sys.skewHermitian ? new double[len] : null;
         wr = new double[len];
         wi = new double[len];
         er = new double[len];
@@ -166,11 +173,35 @@ public abstract class Kernel {
 
     /** X ← exp(W) X, with W in (wr, wi) (overwritten by nothing; er/ei and sr/si used as scratch). */
     protected final void expApply(double[] omR, double[] omI, int p, double[] xr, double[] xi) {
-        expm.compute(omR, omI, er, ei);
-        exponentials++;
+        exponential(1.0, omR, omI, er, ei);
         mulLeft(p, er, ei, xr, xi, sr, si);
         System.arraycopy(sr, 0, xr, 0, m * p);
         System.arraycopy(si, 0, xi, 0, m * p);
+    }
+
+    /**
+     * out = exp(scale·Ω). For a Hamiltonian system Ω = −iK with K Hermitian, and the exponential comes from the
+     * eigendecomposition of K, so it is unitary to a few ulps whatever ‖Ω‖ (N.J. Higham, Functions of Matrices,
+     * SIAM 2008, §10.1); otherwise Padé scaling and squaring (N.J. Higham, SIAM J. Matrix Anal. Appl. 26 (2005)
+     * 1179–1193). Outputs must not alias inputs.
+     */
+    protected final void exponential(double scale, double[] omR, double[] omI, double[] outR, double[] outI) {
+        exponentials++;
+        if (hexp == null) {
+            expm.compute(scale, omR, omI, outR, outI);
+            return;
+        }
+        int len = m * m;
+        for (int q = 0; q < len; q++) {
+            kr[q] = -omI[q];
+            ki[q] = omR[q];
+        }
+        hexp.compute(kr, ki, scale, outR, outI);
+    }
+
+    /** @return whether exponentials are computed by the unitary eigen route */
+    protected final boolean unitaryExponentials() {
+        return hexp != null;
     }
 
     /** (yr, yi) = E X for E m×m and X m×p; outputs must not alias inputs. */

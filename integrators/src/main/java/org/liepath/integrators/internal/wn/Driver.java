@@ -1,5 +1,6 @@
 package org.liepath.integrators.internal.wn;
 
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
@@ -40,6 +41,11 @@ public final class Driver {
 
         /** out (planar N×N) = the chart's product at coordinates y (the propagator relative to the chart's base). */
         void reconstruct(double[] y, double[] outR, double[] outI);
+
+        /** @return a description of the breakdown at y, used when health exceeds 1 and re-anchoring is off */
+        default String breakdown(double[] y) {
+            return "the chart became ill-conditioned";
+        }
     }
 
     /** The outcome. */
@@ -59,6 +65,14 @@ public final class Driver {
 
         Reanchor() {
             super(null, null, false, false);
+        }
+    }
+
+    private static final class Breakdown extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        Breakdown(String message) {
+            super(message, null, false, false);
         }
     }
 
@@ -154,16 +168,18 @@ public final class Driver {
                     res.sampleU.add(new double[][]{ur, ui});
                     nextSample[0]++;
                 }
-                double[] yc = interp.getInterpolatedState();
                 interp.setInterpolatedTime(tc);
-                yc = interp.getInterpolatedState();
+                double[] yc = interp.getInterpolatedState();
                 System.arraycopy(yc, 0, lastY, 0, sz);
                 lastT[0] = tc;
                 if (!monitor.onProgress(Math.min(1.0, Math.abs(tc - t0) / span), counters[1])) {
                     throw new Cancelled();
                 }
-                if (reanchor && !isLast && model.health(yc) > 1) {
-                    throw new Reanchor();
+                if (!isLast && model.health(yc) > 1) {
+                    if (reanchor) {
+                        throw new Reanchor();
+                    }
+                    throw new Breakdown(model.breakdown(yc) + " at t = " + tc);
                 }
             }
         };
@@ -190,7 +206,7 @@ public final class Driver {
                 stopIdx++;
             } catch (Reanchor e) {
                 restart = true;
-            } catch (Singular | MathIllegalStateException e) {
+            } catch (Singular | MathIllegalStateException | MathIllegalArgumentException e) {
                 if (!reanchor || lastT[0] == t) {
                     res.failure = (e instanceof Singular ? "the chart is singular" : "the coordinate integrator failed ("
                             + e.getMessage() + ")") + " at t = " + lastT[0]
@@ -198,6 +214,9 @@ public final class Driver {
                     break;
                 }
                 restart = true;
+            } catch (Breakdown e) {
+                res.failure = e.getMessage();
+                break;
             } catch (Cancelled e) {
                 res.cancelled = true;
                 res.failure = "cancelled by the monitor at t = " + lastT[0];
