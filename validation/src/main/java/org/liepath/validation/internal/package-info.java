@@ -1,2 +1,2 @@
-/** Implementation of the validation module: tables, plotting helpers. Not API. */
+/** Implementation detail of the validation module (Hermitian spectra, table formatting); not part of the API. */
 package org.liepath.validation.internal;
