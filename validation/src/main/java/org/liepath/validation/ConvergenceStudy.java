@@ -167,7 +167,7 @@ public final class ConvergenceStudy {
         }
     }
 
-    /** Fits the order to given points (step sizes strictly decreasing); exposed for studies of other quantities. */
+    /** Fits the order to given points (step sizes strictly decreasing) with the policy of the class comment. */
     static ConvergenceStudy fit(String label, List<Point> pts, double floor) {
         int m = pts.size();
         double[] slope = new double[Math.max(0, m - 1)];
