@@ -39,6 +39,13 @@ class ReportTest {
         assertEquals(500, b.getHeight());
     }
 
+    /** Markdown tables escape a '|' inside a cell (GitHub-flavoured Markdown table syntax). */
+    @Test
+    void markdownCellsEscapePipes() {
+        String md = new org.liepath.validation.internal.TextTable("state", "p").add("|10⟩", 0.5).markdown();
+        assertEquals("| state | p |\n|---|---|\n| \\|10⟩ | 0.5 |\n", md);
+    }
+
     @Test
     void badInput() {
         InvalidInputException name = assertThrows(InvalidInputException.class,

@@ -62,15 +62,26 @@ public final class TextTable {
 
     /** @return a GitHub-flavoured Markdown table */
     public String markdown() {
-        StringBuilder sb = new StringBuilder("| ").append(String.join(" | ", header)).append(" |\n|");
+        StringBuilder sb = new StringBuilder();
+        mdLine(sb, header);
+        sb.append('|');
         for (int c = 0; c < header.size(); c++) {
             sb.append("---|");
         }
         sb.append('\n');
         for (List<String> r : rows) {
-            sb.append("| ").append(String.join(" | ", r)).append(" |\n");
+            mdLine(sb, r);
         }
         return sb.toString();
+    }
+
+    // a '|' inside a cell (a ket such as |10⟩) would end the cell: escape it
+    private static void mdLine(StringBuilder sb, List<String> cells) {
+        sb.append('|');
+        for (String c : cells) {
+            sb.append(' ').append(c.replace("|", "\\|")).append(" |");
+        }
+        sb.append('\n');
     }
 
     /** @return CSV with a header line */
