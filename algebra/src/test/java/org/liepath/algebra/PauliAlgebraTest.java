@@ -32,6 +32,22 @@ class PauliAlgebraTest {
         assertEquals(expected, a.type());
     }
 
+    // Strings of two (and, in the soak run, three) 64-bit words in the closure and in the type identification.
+    @ParameterizedTest(name = "n = {0}")
+    @ValueSource(ints = {65, 70, 130})
+    void isingPerTermMultiWord(int n) {
+        org.junit.jupiter.api.Assumptions.assumeTrue(n < 100 || Boolean.getBoolean("liepath.soak"),
+                "130 qubits (dimension 33 670) only in the soak run");
+        PauliAlgebra a = PauliAlgebra.generatedBy(SpinChains.isingPerTerm(n));
+        assertEquals(n * (2 * n - 1), a.dimension());
+        if (n < 100) {
+            assertEquals("so(" + 2 * n + ")", a.type());
+        }
+        // a Majorana bilinear spanning the whole chain: Y_0 Z … Z X_{n−1}-type strings are in, a lone Y is not
+        assertFalse(a.contains(PauliSum.of(PauliString.single(n, n - 1, 'Y'))));
+        assertTrue(a.contains(PauliSum.of(PauliString.single(n, n - 1, 'X'))));
+    }
+
     @Test
     void isingPerTermFiftyQubits() {
         PauliAlgebra a = PauliAlgebra.generatedBy(SpinChains.isingPerTerm(50));
