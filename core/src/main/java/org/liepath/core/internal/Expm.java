@@ -6,7 +6,10 @@ package org.liepath.core.internal;
  * <p>Method: N.J. Higham, "The scaling and squaring method for the matrix exponential revisited", SIAM J. Matrix
  * Anal. Appl. 26(4) (2005) 1179–1193: degree m ∈ {3, 5, 7, 9} is used when ‖A‖₁ ≤ θ_m, otherwise A is scaled by 2^-s
  * so that ‖2^-s A‖₁ ≤ θ_13, r_13 is evaluated with six products and one LU solve, and the result squared s times.
- * θ_m and the Padé coefficients b_j = (2m−j)!/((m−j)! j!) are the published double-precision values.
+ * θ_m and the Padé coefficients b_j = (2m−j)!/((m−j)! j!) are the published double-precision values. The powers
+ * A², A⁴ formed for the degree tests are reused (rescaled by 2^{-2s}, 2^{-4s}) after scaling, as in the paper.
+ * Orders 1 and 2 use closed forms ({@link #exp2}), which are exact to rounding also for defective and nearly
+ * degenerate 2×2 matrices.
  *
  * <p>A workspace object holds every scratch array, so repeated calls at one dimension allocate nothing. Instances are
  * not thread-safe; use one per thread. Not part of the public API.
@@ -71,6 +74,14 @@ public final class Expm {
 
     private void run(double[] outRe, double[] outIm) {
         int len = n * n;
+        if (n <= 2) {
+            if (n == 1) {
+                expScalar(ar[0], ai[0], outRe, outIm, 0);
+            } else {
+                exp2(1.0, 0.0, ar, ai, outRe, outIm);
+            }
+            return;
+        }
         double norm = Dense.norm1(n, ar, ai);
         if (norm == 0) {
             Dense.identity(n, outRe, outIm);
@@ -86,11 +97,11 @@ public final class Expm {
             lowDegree(B3, 1, outRe, outIm);
             return;
         }
+        Dense.mul(n, a2r, a2i, a2r, a2i, a4r, a4i);
         if (norm <= THETA[1]) {
             lowDegree(B5, 2, outRe, outIm);
             return;
         }
-        Dense.mul(n, a2r, a2i, a2r, a2i, a4r, a4i);
         if (norm <= THETA[2]) {
             Dense.mul(n, a4r, a4i, a2r, a2i, a6r, a6i);
             lowDegree(B7, 3, outRe, outIm);
@@ -111,13 +122,17 @@ public final class Expm {
             }
         }
         if (s > 0) {
-            double f = Math.scalb(1.0, -s);
+            // the powers already formed are rescaled by 2^-2s and 2^-4s instead of recomputed (Higham 2005 §2);
+            // scaling by a power of two is exact unless it underflows, which only loses entries below 1e-300·‖A‖
+            double f = Math.scalb(1.0, -s), f2 = Math.scalb(1.0, -2 * s), f4 = Math.scalb(1.0, -4 * s);
             for (int k = 0; k < len; k++) {
                 ar[k] *= f;
                 ai[k] *= f;
+                a2r[k] *= f2;
+                a2i[k] *= f2;
+                a4r[k] *= f4;
+                a4i[k] *= f4;
             }
-            Dense.mul(n, ar, ai, ar, ai, a2r, a2i);
-            Dense.mul(n, a2r, a2i, a2r, a2i, a4r, a4i);
         }
         Dense.mul(n, a4r, a4i, a2r, a2i, a6r, a6i);
         double[] b = B13;
@@ -208,5 +223,93 @@ public final class Expm {
             java.util.Arrays.fill(outRe, 0, len, Double.NaN);
             java.util.Arrays.fill(outIm, 0, len, Double.NaN);
         }
+    }
+
+    /** out[o] = exp(zr + i zi). */
+    private static void expScalar(double zr, double zi, double[] outRe, double[] outIm, int o) {
+        double m = Math.exp(zr);
+        outRe[o] = m * Math.cos(zi);
+        outIm[o] = m * Math.sin(zi);
+    }
+
+    /**
+     * Closed form of exp(c·A) for any complex 2×2 matrix A (planar, row-major, length 4) and complex scalar
+     * c = cr + i·ci. Outputs may alias inputs; nothing is allocated.
+     *
+     * <p>With μ = tr(cA)/2 and B = cA − μI (traceless, so B² = δ² I with δ² = −det B):
+     * exp(cA) = e^μ (cosh δ · I + (sinh δ / δ) · B), which is even in δ, so either square root serves
+     * (the Cayley–Hamilton form for 2×2 matrices; e.g. N.J. Higham, <i>Functions of Matrices</i>, SIAM 2008, §10.4.3
+     * and Problem 10.8 [from memory]). For |δ| &lt; 1/2 the factor sinh δ / δ is summed as its Taylor series, so
+     * nearly degenerate and defective matrices (Jordan blocks, δ → 0) lose no accuracy to cancellation. For larger
+     * |δ| the two scalar exponentials e^{μ±δ} are formed directly, which cannot overflow unless the result does.
+     */
+    public static void exp2(double cr, double ci, double[] inRe, double[] inIm, double[] outRe, double[] outIm) {
+        // cA
+        double ar = cr * inRe[0] - ci * inIm[0], ai = cr * inIm[0] + ci * inRe[0];
+        double br = cr * inRe[1] - ci * inIm[1], bi = cr * inIm[1] + ci * inRe[1];
+        double gr = cr * inRe[2] - ci * inIm[2], gi = cr * inIm[2] + ci * inRe[2];
+        double dr = cr * inRe[3] - ci * inIm[3], di = cr * inIm[3] + ci * inRe[3];
+        double mur = 0.5 * (ar + dr), mui = 0.5 * (ai + di);
+        // B = cA − μI: diagonal ±h with h = (a − d)/2
+        double hr = 0.5 * (ar - dr), hi = 0.5 * (ai - di);
+        // δ² = h² + b·g
+        double sqr = hr * hr - hi * hi + br * gr - bi * gi;
+        double sqi = 2 * hr * hi + br * gi + bi * gr;
+        // principal square root of δ², in the cancellation-free form (no trigonometry, so that a real δ² < 0,
+        // the Hermitian case, gives an exactly imaginary δ and exactly unimodular e^{μ±δ})
+        double abs2 = HermitianEigen.hyp(sqr, sqi);
+        double mod = Math.sqrt(abs2);
+        double delr, deli;
+        if (abs2 == 0) {
+            delr = 0;
+            deli = 0;
+        } else if (sqr >= 0) {
+            delr = Math.sqrt(0.5 * (abs2 + sqr));
+            deli = sqi / (2 * delr);
+        } else {
+            double q = Math.sqrt(0.5 * (abs2 - sqr));
+            delr = Math.abs(sqi) / (2 * q);
+            deli = Math.copySign(q, sqi);
+        }
+        double chr, chi, shr, shi; // e^μ cosh δ and e^μ sinh δ / δ
+        if (mod < 0.5) {
+            // sinh δ / δ = Σ δ^{2k} / (2k+1)!  (|δ²| < 1/4: 9 terms leave < 1e-23); cosh δ = Σ δ^{2k} / (2k)!
+            double sr = 1, si = 0, cshr = 1, cshi = 0;
+            for (int k = 9; k >= 1; k--) {
+                // Horner: s ← 1 + δ² s / ((2k)(2k+1)), c ← 1 + δ² c / ((2k−1)(2k))
+                double fs = 1.0 / ((2.0 * k) * (2.0 * k + 1)), fc = 1.0 / ((2.0 * k - 1) * (2.0 * k));
+                double tr = sqr * sr - sqi * si, ti = sqr * si + sqi * sr;
+                sr = 1 + fs * tr;
+                si = fs * ti;
+                tr = sqr * cshr - sqi * cshi;
+                ti = sqr * cshi + sqi * cshr;
+                cshr = 1 + fc * tr;
+                cshi = fc * ti;
+            }
+            double em = Math.exp(mur), er = em * Math.cos(mui), ei = em * Math.sin(mui);
+            chr = er * cshr - ei * cshi;
+            chi = er * cshi + ei * cshr;
+            shr = er * sr - ei * si;
+            shi = er * si + ei * sr;
+        } else {
+            double ep = Math.exp(mur + delr), em = Math.exp(mur - delr);
+            double pr = ep * Math.cos(mui + deli), pim = ep * Math.sin(mui + deli);
+            double qr = em * Math.cos(mui - deli), qim = em * Math.sin(mui - deli);
+            chr = 0.5 * (pr + qr);
+            chi = 0.5 * (pim + qim);
+            // (e^{μ+δ} − e^{μ−δ}) / (2δ)
+            double nr = 0.5 * (pr - qr), ni = 0.5 * (pim - qim);
+            double den = delr * delr + deli * deli;
+            shr = (nr * delr + ni * deli) / den;
+            shi = (ni * delr - nr * deli) / den;
+        }
+        outRe[0] = chr + shr * hr - shi * hi;
+        outIm[0] = chi + shr * hi + shi * hr;
+        outRe[3] = chr - (shr * hr - shi * hi);
+        outIm[3] = chi - (shr * hi + shi * hr);
+        outRe[1] = shr * br - shi * bi;
+        outIm[1] = shr * bi + shi * br;
+        outRe[2] = shr * gr - shi * gi;
+        outIm[2] = shr * gi + shi * gr;
     }
 }

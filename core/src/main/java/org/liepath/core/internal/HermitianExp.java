@@ -1,20 +1,99 @@
 package org.liepath.core.internal;
 
 /**
- * exp(−i t H) for Hermitian H. (Provisional: Padé scaling and squaring; to be replaced by the eigendecomposition.)
- * Not part of the public API.
+ * The propagator exp(−i t H) of a Hermitian n×n matrix H (planar, row-major), computed from the eigendecomposition
+ * H = V diag(λ) V†: exp(−i t H) = V diag(e^{−i t λ}) V† (see N.J. Higham, <i>Functions of Matrices</i>, SIAM 2008,
+ * §4.5 and §10.1: for normal matrices the eigen approach is perfectly conditioned because V is unitary).
+ *
+ * <p>Why eigen rather than Padé: measured on random Hermitian matrices (see the benchmarks module,
+ * {@code HermitianExpBenchmark}, and the unit test comparing both), the eigen route gives a unitarity defect
+ * ‖U†U − I‖_F at the level of a few ulps·n for every ‖tH‖, whereas scaling and squaring accumulates one rounding
+ * per squaring (defect growing like log₂‖tH‖), and the eigen route is also faster from n = 3 upward for
+ * ‖tH‖₁ ≳ 1 (it costs about 25n³ flops against 6 products, an LU solve and s squarings). 1×1 and 2×2 use closed
+ * forms ({@link Expm#exp2}, exactly unitary to rounding).
+ *
+ * <p>A workspace instance holds every scratch array, so {@link #compute} allocates nothing; instances are not
+ * thread-safe (one per thread). Not part of the public API.
  */
 public final class HermitianExp {
-    private HermitianExp() {
+    private final int n;
+    private final HermitianEigen eigen;
+    private final double[] lambda, vr, vi, wr, wi;
+
+    /** Creates a workspace for n×n matrices. */
+    public HermitianExp(int n) {
+        if (n <= 0) {
+            throw new IllegalArgumentException("n: expected a positive dimension, got " + n);
+        }
+        this.n = n;
+        int len = n > 2 ? n * n : 0;
+        eigen = n > 2 ? new HermitianEigen(n) : null;
+        lambda = new double[n];
+        vr = new double[len];
+        vi = new double[len];
+        wr = new double[len];
+        wi = new double[len];
     }
 
-    public static void expMinusI(int n, double[] hr, double[] hi, double t, double[] outRe, double[] outIm) {
-        int len = n * n;
-        double[] ar = new double[len], ai = new double[len];
-        for (int k = 0; k < len; k++) {
-            ar[k] = t * hi[k];
-            ai[k] = -t * hr[k];
+    /** @return the dimension this workspace serves */
+    public int dim() {
+        return n;
+    }
+
+    /**
+     * out = exp(−i t H) for Hermitian H = (hr, hi). H is not checked for Hermiticity here (callers check at their
+     * front door); only its Hermitian part matters to first order. Inputs are not modified; outputs may alias inputs.
+     * Allocates nothing.
+     */
+    public void compute(double[] hr, double[] hi, double t, double[] outRe, double[] outIm) {
+        if (n == 1) {
+            double ph = -t * hr[0];
+            outRe[0] = Math.cos(ph);
+            outIm[0] = Math.sin(ph);
+            return;
         }
-        Expm.exp(n, ar, ai, outRe, outIm);
+        if (n == 2) {
+            Expm.exp2(0.0, -t, hr, hi, outRe, outIm);
+            return;
+        }
+        if (!eigen.compute(hr, hi, lambda, vr, vi)) {
+            java.util.Arrays.fill(outRe, 0, n * n, Double.NaN);
+            java.util.Arrays.fill(outIm, 0, n * n, Double.NaN);
+            return;
+        }
+        // W = V diag(e^{−i t λ})
+        for (int k = 0; k < n; k++) {
+            double ph = -t * lambda[k];
+            double c = Math.cos(ph), s = Math.sin(ph);
+            for (int i = 0; i < n; i++) {
+                int ik = i * n + k;
+                double a = vr[ik], b = vi[ik];
+                wr[ik] = a * c - b * s;
+                wi[ik] = a * s + b * c;
+            }
+        }
+        // out = W V†: out_ij = Σ_k W_ik conj(V_jk), rows against rows (contiguous)
+        for (int i = 0; i < n; i++) {
+            int io = i * n;
+            for (int j = 0; j < n; j++) {
+                int jo = j * n;
+                double sr = 0, si = 0;
+                for (int k = 0; k < n; k++) {
+                    double ar = wr[io + k], ai = wi[io + k], br = vr[jo + k], bi = vi[jo + k];
+                    sr += ar * br + ai * bi;
+                    si += ai * br - ar * bi;
+                }
+                outRe[io + j] = sr;
+                outIm[io + j] = si;
+            }
+        }
+    }
+
+    /**
+     * Convenience form: allocates a workspace and computes out = exp(−i t H). Inputs are not modified; outputs may
+     * alias inputs.
+     */
+    public static void expMinusI(int n, double[] hr, double[] hi, double t, double[] outRe, double[] outIm) {
+        new HermitianExp(n).compute(hr, hi, t, outRe, outIm);
     }
 }

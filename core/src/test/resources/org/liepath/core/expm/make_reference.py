@@ -1,0 +1,138 @@
+#!/usr/bin/env python3
+"""Reference exponentials for ExpmReferenceTest, computed offline at 50 significant digits with mpmath.
+
+Run:  python3 make_reference.py > reference.csv      (Debian package python3-mpmath; deterministic: fixed seed)
+
+Each line: name,n,kappa,norm1,<n*n real parts of A>,<n*n imag parts of A>,<n*n real parts of e^A>,<n*n imag of e^A>
+(row-major). A has entries that are exact doubles (rounded to 17 digits, then used as given), so the reference is
+the exponential of exactly the matrix the Java test builds.
+
+The exponential is computed twice, by mpmath's Taylor and Padé scaling-and-squaring at 60 digits; a case is
+written only if both agree to 1e-45 relative. kappa is a lower estimate of the relative condition number
+kappa(A) = ||L(A)||_F ||A||_F / ||e^A||_F of the exponential (N.J. Higham, Functions of Matrices, SIAM 2008,
+§3.1 and §10.2): the largest ||L(A,E)||_F / ||E||_F over a few random directions E, with the Frechet derivative
+L(A,E) read off the block exponential exp([[A, E], [0, A]]) (C. Van Loan, IEEE Trans. Automat. Control 23 (1978)
+395-404 [from memory]). Only cases with kappa <= 300 are kept, so the double-precision forward error bound
+u * kappa <= 3.3e-14 lies well below the test's 1e-13.
+"""
+import random
+import mpmath as mp
+
+mp.mp.dps = 60
+rng = random.Random(20261201)
+
+
+def d(x):
+    """round to an exact double (the Java test reads these 17-digit decimals back as the same doubles)"""
+    return float(x)
+
+
+def gauss_complex(n):
+    return [[complex(rng.gauss(0, 1), rng.gauss(0, 1)) for _ in range(n)] for _ in range(n)]
+
+
+def norm1(a):
+    n = len(a)
+    return max(sum(abs(a[i][j]) for i in range(n)) for j in range(n))
+
+
+def scaled(a, target):
+    s = target / norm1(a)
+    return [[complex(d((z * s).real), d((z * s).imag)) for z in row] for row in a]
+
+
+def to_mp(a):
+    return mp.matrix([[mp.mpc(z.real, z.imag) for z in row] for row in a])
+
+
+def frob(m):
+    return mp.sqrt(sum(abs(m[i, j]) ** 2 for i in range(m.rows) for j in range(m.cols)))
+
+
+def expm_checked(am):
+    e1 = mp.expm(am, method='taylor')
+    e2 = mp.expm(am, method='pade')
+    rel = frob(e1 - e2) / frob(e1)
+    return e1, rel
+
+
+def kappa(am, ea):
+    n = am.rows
+    best = mp.mpf(0)
+    for _ in range(3):
+        e = mp.matrix([[mp.mpc(rng.gauss(0, 1), rng.gauss(0, 1)) for _ in range(n)] for _ in range(n)])
+        big = mp.zeros(2 * n, 2 * n)
+        for i in range(n):
+            for j in range(n):
+                big[i, j] = am[i, j]
+                big[n + i, n + j] = am[i, j]
+                big[i, n + j] = e[i, j]
+        l = mp.expm(big, method='taylor')
+        lf = frob(mp.matrix([[l[i, n + j] for j in range(n)] for i in range(n)]))
+        best = max(best, lf / frob(e))
+    return best * frob(am) / frob(ea)
+
+
+def cases():
+    # 1. dense random complex (non-normal), 1-norms on both sides of every Padé threshold and far beyond
+    #    (theta_3..theta_13 of Higham 2005: 0.015, 0.25, 0.95, 2.1, 5.4), needing up to ~6 squarings
+    for target in (0.005, 0.1, 0.5, 1.5, 3.0, 5.0, 12.0, 40.0, 150.0):
+        for n in (3, 5, 8):
+            yield "gauss_n%d_norm%g" % (n, target), scaled(gauss_complex(n), target)
+    # 2. upper triangular with a large nilpotent part: D + c N (strongly non-normal)
+    for n in (4, 6):
+        for c in (1.0, 10.0):
+            a = [[0j] * n for _ in range(n)]
+            for i in range(n):
+                a[i][i] = complex(d(rng.uniform(-1, 1)), d(rng.uniform(-2, 2)))
+                for j in range(i + 1, n):
+                    a[i][j] = complex(d(c * rng.gauss(0, 1)), d(c * rng.gauss(0, 1)))
+            yield "triangular_n%d_c%g" % (n, c), a
+    # 3. shifted nilpotent: lambda I + N with N strictly upper triangular (e^A = e^lambda * polynomial in N)
+    for n in (3, 5, 7):
+        lam = complex(d(rng.uniform(-3, 3)), d(rng.uniform(-3, 3)))
+        a = [[0j] * n for _ in range(n)]
+        for i in range(n):
+            a[i][i] = lam
+            for j in range(i + 1, n):
+                a[i][j] = complex(d(rng.gauss(0, 1)), 0.0)
+        yield "shifted_nilpotent_n%d" % n, a
+    # 4. skew-Hermitian of large norm (unitary exponential; many squarings) and Hermitian (positive definite e^A)
+    for n, target in ((4, 60.0), (6, 200.0)):
+        g = gauss_complex(n)
+        h = [[(g[i][j] + g[j][i].conjugate()) / 2 for j in range(n)] for i in range(n)]
+        s = target / norm1(h)
+        yield "skew_hermitian_n%d_norm%g" % (n, target), [[complex(d(-(h[i][j] * s).imag), d((h[i][j] * s).real))
+                                                          for j in range(n)] for i in range(n)]
+    for n, target in ((5, 30.0),):
+        g = gauss_complex(n)
+        h = [[(g[i][j] + g[j][i].conjugate()) / 2 for j in range(n)] for i in range(n)]
+        yield "hermitian_n%d_norm%g" % (n, target), scaled(h, target)
+
+
+def fmt(x):
+    return mp.nstr(x, 25, min_fixed=1, max_fixed=0)
+
+
+def main():
+    print("# name,n,kappa,norm1,Are(n*n),Aim(n*n),Ere(n*n),Eim(n*n); generated by make_reference.py (mpmath %s, 60 digits)"
+          % mp.__version__)
+    for name, a in cases():
+        n = len(a)
+        am = to_mp(a)
+        ea, rel = expm_checked(am)
+        if rel > mp.mpf('1e-45'):
+            raise SystemExit("methods disagree on %s: %s" % (name, rel))
+        k = kappa(am, ea)
+        if k > 300:
+            continue
+        row = [name, str(n), mp.nstr(k, 4), repr(norm1(a))]
+        row += [repr(a[i][j].real) for i in range(n) for j in range(n)]
+        row += [repr(a[i][j].imag) for i in range(n) for j in range(n)]
+        row += [fmt(ea[i, j].real) for i in range(n) for j in range(n)]
+        row += [fmt(ea[i, j].imag) for i in range(n) for j in range(n)]
+        print(",".join(row))
+
+
+if __name__ == "__main__":
+    main()
