@@ -37,7 +37,7 @@ import java.util.List;
  *
  * <p><b>Cost.</b> Every element is bracketed with every generator only (which suffices: N. Jacobson, Lie Algebras,
  * 1962, §I.2), so the string path costs O(d·k·q/64) for dimension d, k generators and q qubits (the free-fermion
- * algebra so(100) of 50 qubits, d = 4950 from k = 99 strings, takes milliseconds). The general path costs the
+ * algebra so(100) of 50 qubits, d = 4950 from k = 99 strings, takes a few tens of milliseconds). The general path costs the
  * product of the sizes of the two sums per bracket, plus the elimination against up to d rows. The default size limit is {@value #DEFAULT_MAX_DIMENSION}
  * elements (su(256) fits); larger closures need the overload with a limit.
  *

@@ -32,6 +32,22 @@ class PauliAlgebraTest {
         assertEquals(expected, a.type());
     }
 
+    // Strings of two (and, in the soak run, three) 64-bit words in the closure and in the type identification.
+    @ParameterizedTest(name = "n = {0}")
+    @ValueSource(ints = {65, 70, 130})
+    void isingPerTermMultiWord(int n) {
+        org.junit.jupiter.api.Assumptions.assumeTrue(n < 100 || Boolean.getBoolean("liepath.soak"),
+                "130 qubits (dimension 33 670) only in the soak run");
+        PauliAlgebra a = PauliAlgebra.generatedBy(SpinChains.isingPerTerm(n));
+        assertEquals(n * (2 * n - 1), a.dimension());
+        if (n < 100) {
+            assertEquals("so(" + 2 * n + ")", a.type());
+        }
+        // a Majorana bilinear spanning the whole chain: Y_0 Z … Z X_{n−1}-type strings are in, a lone Y is not
+        assertFalse(a.contains(PauliSum.of(PauliString.single(n, n - 1, 'Y'))));
+        assertTrue(a.contains(PauliSum.of(PauliString.single(n, n - 1, 'X'))));
+    }
+
     @Test
     void isingPerTermFiftyQubits() {
         PauliAlgebra a = PauliAlgebra.generatedBy(SpinChains.isingPerTerm(50));
@@ -125,6 +141,34 @@ class PauliAlgebraTest {
         assertEquals("su(2) ⊕ su(2) ⊕ su(2)", open(3, "XI", "YI", "IX", "IY").type()); // b3: n·so(3)
         assertEquals("su(8) ⊕ su(8) ⊕ u(1)", open(4, "XX", "XY", "XZ", "XI", "IX", "IY", "IZ").type()); // b4
         assertEquals("u(1)^5", open(3, "XX", "XI", "IX").type()); // b1: (2n−1)·u(1)
+    }
+
+    // Free fermions beyond the open chain (dimensions computed independently by an exact string closure outside this
+    // project): the periodic chain {X_iX_{i+1}} ∪ {Z_i} has dimension 2n(2n−1); under the Jordan–Wigner map the
+    // boundary bond carries the fermion parity, splitting the two parity sectors into so(2n) ⊕ so(2n). Adding
+    // Z_iZ_{i+1} to the number-conserving hopping {XX, XY, YX, YY} ∪ {Z_i} leaves only parity, giving one full
+    // su(2^{n−1}) per parity sector (30, 126, 510, 2046 for n = 3 … 6).
+    @Test
+    void freeFermionVariants() {
+        for (int n = 3; n <= 6; n++) {
+            List<PauliSum> ring = new ArrayList<>(SpinChains.perBond(n, true, "XX"));
+            List<PauliSum> hop = new ArrayList<>(SpinChains.perBond(n, false, "XX", "XY", "YX", "YY", "ZZ"));
+            for (int i = 0; i < n; i++) {
+                ring.add(PauliSum.of(PauliString.single(n, i, 'Z')));
+                hop.add(PauliSum.of(PauliString.single(n, i, 'Z')));
+            }
+            PauliAlgebra a = PauliAlgebra.generatedBy(ring), b = PauliAlgebra.generatedBy(hop);
+            assertEquals(2 * n * (2 * n - 1), a.dimension());
+            String so = n == 3 ? "su(4)" : "so(" + 2 * n + ")";
+            assertEquals(so + " ⊕ " + so, a.type());
+            assertEquals(2 * ((1 << (2 * n - 2)) - 1), b.dimension());
+            assertEquals("su(" + (1 << (n - 1)) + ") ⊕ su(" + (1 << (n - 1)) + ")", b.type());
+            if (n == 3) {
+                // the dense decomposition (numerical, independent code) agrees
+                assertEquals(PauliAlgebraSumsTest.factors(a.type()),
+                        PauliAlgebraSumsTest.factors(LieAlgebra.generatedBy(PauliAlgebraSumsTest.dense(ring)).type()));
+            }
+        }
     }
 
     private static PauliAlgebra open(int n, String... patterns) {

@@ -163,7 +163,7 @@ public final class StringTypes {
                     t.product(torus.get(k), orbit.get(o), buf);
                     int id = t.find(buf, 0);
                     if (id < 0) {
-                        throw new IllegalStateException("string set is not closed under brackets");
+                        return null; // not closed under brackets: nothing can be certified
                     }
                     if (!seen[id]) {
                         seen[id] = true;
