@@ -79,6 +79,7 @@ public final class LieAlgebra {
     private LieAlgebra compactCache;
     private boolean compactDone;
     private Analysis.Roots genericCache;
+    private StructureConstants constantsCache;
 
     private LieAlgebra(int n, boolean complex, double tol, Basis real, RealStructure rs) {
         this.n = n;
@@ -608,7 +609,14 @@ public final class LieAlgebra {
      * @return the structure constants [e_i, e_j] = Σ_k c_ij^k e_k in {@link #basis()} (real for real algebras,
      *         complex for complex ones). Computed once (m²/2 brackets) and cached.
      */
-    public StructureConstants structureConstants() {
+    public synchronized StructureConstants structureConstants() {
+        if (constantsCache == null) {
+            constantsCache = buildConstants();
+        }
+        return constantsCache;
+    }
+
+    private StructureConstants buildConstants() {
         RealStructure s = rs();
         int m = dimension();
         // collect (pair, k) → (re, im); for a complex algebra the constants of e_i = E_2i sit at realified
