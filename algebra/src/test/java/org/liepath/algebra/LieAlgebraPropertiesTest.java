@@ -213,6 +213,30 @@ class LieAlgebraPropertiesTest {
         }
     }
 
+    @org.junit.jupiter.api.Test
+    void sharedInstanceGivesTheSameAnswersOnEveryThread() throws Exception {
+        // lazily computed parts are published under the instance's lock: concurrent first calls must agree
+        List<Operator> gens = Gens.perBond(4, "XX", "YY", "YZ");
+        LieAlgebra g = LieAlgebra.generatedBy(gens);
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(4);
+        try {
+            List<java.util.concurrent.Future<String>> answers = new ArrayList<>();
+            for (int t = 0; t < 8; t++) {
+                answers.add(pool.submit(() -> g.type() + "|" + g.rank() + "|" + g.center().dimension() + "|"
+                        + g.structureConstants().nonZeros()));
+            }
+            String first = answers.get(0).get();
+            assertEquals("su(8) ⊕ su(8)|14|0|" + g.structureConstants().nonZeros(), first);
+            for (java.util.concurrent.Future<String> f : answers) {
+                assertEquals(first, f.get());
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+        org.junit.jupiter.api.Assertions.assertThrows(UnsupportedOperationException.class,
+                () -> g.basis().add(Operator.zero(16)));
+    }
+
     @ParameterizedTest(name = "seed {0}")
     @MethodSource("org.liepath.testing.Seeds#fewCases")
     void simpleIdealsCommuteAndSpanTheDerivedAlgebra(long seed) {
