@@ -26,7 +26,7 @@ class LieAlgebraPropertiesTest {
 
     /** Random Hermitian generators of several kinds, so that the closures are not all su(N) or u(N). */
     static List<Operator> randomGenerators(Random r) {
-        int n = 2 + r.nextInt(3);
+        int n = 2 + r.nextInt(4);
         int count = 1 + r.nextInt(3);
         int kind = r.nextInt(3);
         int split = 1 + r.nextInt(n - 1);
@@ -211,6 +211,30 @@ class LieAlgebraPropertiesTest {
                 assertEquals(k[j][i], k[i][j], TOL);
             }
         }
+    }
+
+    @org.junit.jupiter.api.Test
+    void sharedInstanceGivesTheSameAnswersOnEveryThread() throws Exception {
+        // lazily computed parts are published under the instance's lock: concurrent first calls must agree
+        List<Operator> gens = Gens.perBond(4, "XX", "YY", "YZ");
+        LieAlgebra g = LieAlgebra.generatedBy(gens);
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(4);
+        try {
+            List<java.util.concurrent.Future<String>> answers = new ArrayList<>();
+            for (int t = 0; t < 8; t++) {
+                answers.add(pool.submit(() -> g.type() + "|" + g.rank() + "|" + g.center().dimension() + "|"
+                        + g.structureConstants().nonZeros()));
+            }
+            String first = answers.get(0).get();
+            assertEquals("su(8) ⊕ su(8)|14|0|" + g.structureConstants().nonZeros(), first);
+            for (java.util.concurrent.Future<String> f : answers) {
+                assertEquals(first, f.get());
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+        org.junit.jupiter.api.Assertions.assertThrows(UnsupportedOperationException.class,
+                () -> g.basis().add(Operator.zero(16)));
     }
 
     @ParameterizedTest(name = "seed {0}")

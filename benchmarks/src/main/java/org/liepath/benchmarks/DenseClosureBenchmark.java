@@ -19,7 +19,8 @@ import java.util.concurrent.TimeUnit;
 
 /**
  * Dense Lie closure of X_i, Y_i (every qubit) and Z_iZ_{i+1} (open chain), which generate su(2^n): dimension 63 for
- * n = 3 and 255 for n = 4 (F. Albertini, D. D'Alessandro, Linear Algebra Appl. 350, 213 (2002)).
+ * n = 3 and 255 for n = 4 (F. Albertini, D. D'Alessandro, Linear Algebra Appl. 350, 213 (2002)); and, as a dense
+ * case where sparsity cannot help, of two random Hermitian matrices (generic pairs generate u(N), common practice).
  *
  * <p>{@code libraryClosure} is {@link LieAlgebra#generatedBy}; its comparator {@code plainDenseClosure} runs the same
  * bracket strategy (new element × generators) with plain dense {@link Operator} arithmetic and modified Gram–Schmidt
@@ -35,21 +36,43 @@ public class DenseClosureBenchmark {
     @Param({"3", "4"})
     public int qubits;
 
+    /** "chain": the Pauli terms above (sparse matrices); "random": two seeded random Hermitian 2^n × 2^n matrices
+     *  (dense; they generate u(2^n), dimension 4^n). */
+    @Param({"chain", "random"})
+    public String kind;
+
     private List<Operator> gens;
 
     @Setup
     public void setup() {
         gens = new ArrayList<>();
-        for (int i = 0; i < qubits; i++) {
-            gens.add(Pauli.string(word(i, -1, 'X')));
-            gens.add(Pauli.string(word(i, -1, 'Y')));
-        }
-        for (int i = 0; i + 1 < qubits; i++) {
-            gens.add(Pauli.string(word(i, i + 1, 'Z')));
-        }
         int d = 1 << qubits;
-        if (libraryClosure() != d * d - 1 || plainDenseClosure() != d * d - 1) {
-            throw new IllegalStateException("closure is not su(" + d + ")");
+        if (kind.equals("random")) {
+            java.util.Random r = new java.util.Random(42);
+            for (int g = 0; g < 2; g++) {
+                double[][] re = new double[d][d], im = new double[d][d];
+                for (int i = 0; i < d; i++) {
+                    re[i][i] = r.nextGaussian();
+                    for (int j = i + 1; j < d; j++) {
+                        re[i][j] = re[j][i] = r.nextGaussian();
+                        im[i][j] = r.nextGaussian();
+                        im[j][i] = -im[i][j];
+                    }
+                }
+                gens.add(Operator.of(re, im));
+            }
+        } else {
+            for (int i = 0; i < qubits; i++) {
+                gens.add(Pauli.string(word(i, -1, 'X')));
+                gens.add(Pauli.string(word(i, -1, 'Y')));
+            }
+            for (int i = 0; i + 1 < qubits; i++) {
+                gens.add(Pauli.string(word(i, i + 1, 'Z')));
+            }
+        }
+        int want = kind.equals("random") ? d * d : d * d - 1;
+        if (libraryClosure() != want || plainDenseClosure() != want) {
+            throw new IllegalStateException("unexpected closure dimension for " + kind);
         }
     }
 
