@@ -211,7 +211,7 @@ class EvolveRunTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("schemes")
     void largeStatesUseKrylovAndAgreeWithTheDensePropagator(Scheme s) {
-        int n = 48; // the smallest dimension that takes the Krylov route
+        int n = 64; // the smallest dimension that takes the Krylov route
         java.util.Random r = new java.util.Random(77);
         Hamiltonian h = Hamiltonian.builder(n).term(0.1, Operator.real(Fixtures.randomSymmetric(r, n)))
                 .term(Operator.real(Fixtures.randomSymmetric(r, n)), Drive.cosine(0.05, 2.0)).build();
