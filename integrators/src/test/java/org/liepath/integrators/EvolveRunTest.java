@@ -69,8 +69,8 @@ class EvolveRunTest {
 
     /**
      * A generator that commutes with itself, H = cos(t) X: U(t) = exp(−i sin(t) X) = cos(sin t) I − i sin(sin t) X.
-     * Embedded partners on shared nodes are blind to the quadrature error here; the adaptive run must still meet
-     * its tolerance (global error ≲ steps × tol).
+     * An embedded partner on the same nodes would be blind to the quadrature error here (they share the quadrature
+     * of ∫A); the adaptive run must still meet its tolerance (global error ≲ steps × tol).
      */
     @ParameterizedTest(name = "{0}")
     @MethodSource("schemes")
