@@ -210,9 +210,10 @@ public final class Evolve {
     }
 
     /**
-     * A progress listener called after every accepted step with the fraction of the interval done and the number of
-     * accepted steps; returning false cancels the run (status CANCELLED, the partial state in the trajectory). A
-     * listener that throws is not called again and the run goes on; the failure is recorded in
+     * A progress listener called after every accepted step (for fixed steps: after every grid step) with the
+     * fraction of the interval done (1 at the last call) and the number of steps so far; returning false cancels the
+     * run (status CANCELLED, the partial state in the trajectory), except at the last call, where nothing is left to
+     * cancel. A listener that throws is not called again and the run goes on; the failure is recorded in
      * {@link Stats#monitorFailure()} and the status message.
      */
     public Evolve monitor(ProgressListener listener) {

@@ -135,6 +135,25 @@ class EvolveRunTest {
         assertEquals(0.3, ev.status().time(), 1e-15);
     }
 
+    /** The listener hears about every accepted step, the last one with fraction 1; a late "stop" is moot. */
+    @Test
+    void listenerSeesEveryStepUpToTheEnd() {
+        Evolve fixed = Evolve.of(Fixtures.drivenFour(6)).over(0, 2).steps(17);
+        for (Evolve e : new Evolve[]{Evolve.of(Fixtures.drivenFour(6)).over(0, 2), fixed,
+            Evolve.of(Fixtures.drivenFour(6)).over(0, 2).scheme(Scheme.reference())}) {
+            List<Double> fractions = new ArrayList<>();
+            Evolution ev = e.monitor((f, c) -> {
+                fractions.add(f);
+                return f < 1.0;
+            }).run();
+            assertTrue(ev.status().isSuccess(), ev.status().toString());
+            // fixed runs report once per grid step (a grid step split at a breakpoint counts once)
+            long expected = e == fixed ? 17 : ev.stats().acceptedSteps();
+            assertEquals(expected, fractions.size());
+            assertEquals(1.0, fractions.get(fractions.size() - 1), 1e-12);
+        }
+    }
+
     @Test
     void throwingListenerDoesNotCorruptTheResult() {
         AtomicInteger calls = new AtomicInteger();

@@ -88,6 +88,7 @@ public final class ReferenceRunner {
         long stepBudget = spec.maxSteps;
         try {
             for (double stop : stops) {
+                boolean finalSegment = stop == spec.t1;
                 DormandPrince853Integrator dp = new DormandPrince853Integrator(Runner.minStep(spec.t0, spec.t1),
                         span, tol, tol);
                 dp.setMaxEvaluations((int) Math.min(Integer.MAX_VALUE, 16 * Math.max(stepBudget - res.accepted, 1)));
@@ -123,7 +124,7 @@ public final class ReferenceRunner {
                                         + "; it was not called again";
                                 go = true;
                             }
-                            if (!go) {
+                            if (!go && !(isLast && finalSegment)) {
                                 res.timeReached = tc;
                                 throw new Cancelled();
                             }
