@@ -16,8 +16,9 @@ System.out.println("coupling part: dimension " + small.dimension() + ", type " +
 System.out.println("with the drive: dimension " + full.dimension() + ", type " + full.type());
 
 // 3. A time-dependent Hamiltonian and an evolution with a fourth-order Magnus scheme.
-var h = Hamiltonian.builder(4).term(0.05, zi).term(-0.03, iz)
-        .term(exchange, Drive.gaussian(0.4, 5.0, 1.5)).term(xi, Drive.cosine(0.02, 0.5)).build();
+// (the jshell tool runs a line as soon as it is a complete statement: continued lines end with an open operator)
+var h = Hamiltonian.builder(4).term(0.05, zi).term(-0.03, iz).
+        term(exchange, Drive.gaussian(0.4, 5.0, 1.5)).term(xi, Drive.cosine(0.02, 0.5)).build();
 var run = Evolve.of(h).over(0, 10).scheme(Scheme.magnus4()).steps(200).run();
 System.out.println(run.status());
 var u = run.propagator();
@@ -29,5 +30,6 @@ var cc = CrossCheck.of(h).over(0, 10).scheme(Scheme.magnus4(), 200).scheme(Schem
 System.out.println(cc);
 var ms = MagnusSeries.of(h, 0, 10);
 System.out.println(ms);
-System.out.println("average gate fidelity, truncated Magnus series vs Magnus-4 run: "
-        + Fidelity.averageGate(ms.propagator(4), u));
+System.out.println("average gate fidelity, truncated Magnus series vs Magnus-4 run: " +
+        Fidelity.averageGate(ms.propagator(4), u));
+/exit

@@ -26,8 +26,8 @@ import java.util.List;
  * strings is 0 or ±2 times a third string, so the algebra has a basis of strings and is computed as a set of strings
  * with no floating-point arithmetic: exact. Otherwise the closure eliminates over strings in floating point: a reduced
  * bracket is taken as zero when its largest coefficient is at most {@value PauliClosure#RELATIVE_TOLERANCE} times
- * the largest coefficient of the bracket before reduction (and entries below {@value PauliClosure#DROP} of a vector's
- * scale are dropped during elimination). With coefficients of moderate spread (say within 10^6 of each other) this
+ * its scale, the largest single product term 2·a_P·b_Q that entered it (so a bracket that cancels to rounding noise
+ * counts as zero); entries below {@value PauliClosure#DROP} of that scale are dropped during elimination. With coefficients of moderate spread (say within 10^6 of each other) this
  * decides dimensions reliably; for nearly dependent generators the answer depends on that tolerance.
  *
  * <p><b>Basis form.</b> The basis is in reduced echelon form over strings: each element has coefficient exactly 1 on
@@ -35,9 +35,10 @@ import java.util.List;
  * canonical order of their pivots ({@link PauliString#compareTo}). For a string algebra every element is one string
  * with coefficient 1.
  *
- * <p><b>Cost.</b> The string path brackets every pair once: O(d² q/64) for dimension d on q qubits (the free-fermion
- * algebra so(100) of 50 qubits, d = 4950, takes a few tens of milliseconds). The general path costs the product of
- * the sizes of the sums per pair, plus the elimination. The default size limit is {@value #DEFAULT_MAX_DIMENSION}
+ * <p><b>Cost.</b> Every element is bracketed with every generator only (which suffices: N. Jacobson, Lie Algebras,
+ * 1962, §I.2), so the string path costs O(d·k·q/64) for dimension d, k generators and q qubits (the free-fermion
+ * algebra so(100) of 50 qubits, d = 4950 from k = 99 strings, takes milliseconds). The general path costs the
+ * product of the sizes of the two sums per bracket, plus the elimination against up to d rows. The default size limit is {@value #DEFAULT_MAX_DIMENSION}
  * elements (su(256) fits); larger closures need the overload with a limit.
  *
  * <p>Thread-safety: immutable; {@link #type()} is computed on first use and cached (a benign race).
@@ -45,9 +46,14 @@ import java.util.List;
 public final class PauliAlgebra {
     /** Size limit of {@link #generatedBy(List)}: 65 536 elements. */
     public static final int DEFAULT_MAX_DIMENSION = 1 << 16;
+    /** Largest number of qubits for which {@link #type()} of a basis of sums is taken from the dense algebra. */
+    public static final int DENSE_TYPE_QUBITS = 5;
+    /** Largest dimension for which {@link #type()} of a basis of sums is taken from the dense algebra. */
+    public static final int DENSE_TYPE_DIMENSION = 256;
 
     private final int qubits;
-    private final List<PauliSum> basis;
+    /** null for a string algebra until first asked for (built from the table; a benign race) */
+    private volatile List<PauliSum> basis;
     private final boolean stringBasis;
     private final PauliClosure.Result result;
     private volatile String type;
@@ -150,16 +156,20 @@ public final class PauliAlgebra {
     }
 
     private static PauliAlgebra fromStrings(int q, PauliClosure.Result r) {
-        PauliString[] s = new PauliString[r.table.size()];
+        return new PauliAlgebra(q, null, true, r);
+    }
+
+    private List<PauliSum> stringsAsBasis() {
+        PauliString[] s = new PauliString[result.table.size()];
         for (int k = 0; k < s.length; k++) {
-            s[k] = string(q, r.table, k);
+            s[k] = string(qubits, result.table, k);
         }
         Arrays.sort(s);
         List<PauliSum> b = new ArrayList<>(s.length);
         for (PauliString p : s) {
             b.add(PauliSum.of(p));
         }
-        return new PauliAlgebra(q, Collections.unmodifiableList(b), true, r);
+        return Collections.unmodifiableList(b);
     }
 
     private static PauliAlgebra fromRows(int q, PauliClosure.Result r) {
@@ -197,12 +207,17 @@ public final class PauliAlgebra {
 
     /** @return the real dimension of the algebra */
     public int dimension() {
-        return basis.size();
+        return result.pivots == null ? result.table.size() : result.pivots.length;
     }
 
     /** @return the basis sums H (the algebra is spanned by the −iH), in reduced echelon form over strings */
     public List<PauliSum> basis() {
-        return basis;
+        List<PauliSum> b = basis;
+        if (b == null) {
+            b = stringsAsBasis();
+            basis = b;
+        }
+        return b;
     }
 
     /** @return true when every basis element is a single Pauli string */
@@ -245,24 +260,38 @@ public final class PauliAlgebra {
     /**
      * The isomorphism type, where it can be certified, else {@code "unknown"}.
      *
-     * <p>Recognised: algebras with a basis of Pauli strings ({@link #isStringBasis()}). Their strings split into the
-     * connected components of the anticommutation graph; each component spans an ideal. An isolated string is a
-     * u(1) of the centre. For a larger component (semisimple: no string in it commutes with all the others) the
-     * rank is the size of a maximal commuting subset, which spans a maximal torus (its centraliser is itself); the
-     * component is all of su(2^k) when it holds all 4^k − 1 non-identity strings on its k-qubit support; otherwise
-     * every compact semisimple algebra of that dimension and rank is enumerated, and candidates are kept only if the
-     * number of strings anticommuting with each basis string (the rank of ad_P, whose eigenvalues are 0, ±2i) is
-     * possible for them. A component is named only when exactly one candidate survives; G2, F4, E8 cannot occur
-     * (they have no such grading element). Names: su(n), so(n), sp(2m) (the compact symplectic algebra of 2m × 2m
-     * matrices, rank m), e6, e7, u(1), joined by " ⊕ " with the largest factors first.
+     * <p>Algebras with a basis of Pauli strings ({@link #isStringBasis()}) are identified exactly, with no
+     * floating point: the centre is spanned by the strings commuting with every generator (one u(1) each); a maximal
+     * commuting set of basis strings spans a Cartan subalgebra (its centraliser is itself); the roots are computed
+     * exactly as sign vectors on that set (from the orbits of the other strings under multiplication by it); the
+     * simple ideals are the irreducible components of the root system, each named from its number of roots, rank
+     * and root lengths. This covers every compact simple type, including the free-fermion so(2n), su(2^k) and the
+     * so / sp families, with B_m and C_m told apart by their root lengths. Up to {@value
+     * org.liepath.algebra.internal.StringTypes#MAX_ROOTS} roots (dimension minus rank), and su(2^k) of any size when
+     * the algebra holds every non-identity string on its support. Names: su(n), so(n), sp(2m) (the compact
+     * symplectic algebra of 2m × 2m matrices, rank m), e6, e7, e8, f4, g2, with the low-dimensional coincidences
+     * written su(2), so(5), su(4) and so(4) as su(2) ⊕ su(2); simple factors are listed largest first, then the
+     * centre as u(1) or u(1)^k; the zero algebra is "0". Cost: about d·(k + r) string operations for dimension d,
+     * k generators and rank r, plus modular elimination of length r for the roots until a basis is found.
      *
-     * <p>Not recognised ("unknown"): bases that are not single strings, components whose (dimension, rank) fits
-     * more than one algebra after the test above, and components too large for the enumeration.
+     * <p>Other bases (sums) on at most {@value #DENSE_TYPE_QUBITS} qubits with dimension at most
+     * {@value #DENSE_TYPE_DIMENSION}: the type that {@link LieAlgebra#type()} finds for the dense matrices (a
+     * numerical decomposition; see there). Anything else: {@code "unknown"}.
      */
     public String type() {
         String t = type;
         if (t == null) {
-            t = stringBasis ? StringTypes.identify(stringTable()) : "unknown";
+            if (stringBasis) {
+                t = StringTypes.identify(stringTable(), result.pivots == null ? result.generators : dimension());
+            } else if (qubits <= DENSE_TYPE_QUBITS && dimension() <= DENSE_TYPE_DIMENSION) {
+                List<org.liepath.core.Operator> ops = new ArrayList<>(dimension());
+                for (PauliSum s : basis()) {
+                    ops.add(s.toOperator());
+                }
+                t = LieAlgebra.spannedBy(ops).type();
+            } else {
+                t = "unknown";
+            }
             type = t;
         }
         return t;
@@ -275,7 +304,7 @@ public final class PauliAlgebra {
         StringTable t = new StringTable(PauliString.words(qubits));
         int w = PauliString.words(qubits);
         long[] buf = new long[2 * w];
-        for (PauliSum s : basis) {
+        for (PauliSum s : basis()) {
             put(buf, 0, s.stringAt(0), w);
             t.intern(buf, 0);
         }

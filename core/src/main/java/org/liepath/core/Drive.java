@@ -79,7 +79,7 @@ public interface Drive {
         for (int k = 0; k < b.length; k++) {
             b[k] += dt;
         }
-        return Drives.make(t -> self.at(t - dt), b, name() + "(t − " + fmt(dt) + ")", isPiecewiseConstant());
+        return Drives.make(t -> self.at(t - dt), b, name() + "(t" + signed(-dt) + ")", isPiecewiseConstant());
     }
 
     /** @return c(t) on [start, end), zero elsewhere (a window with breakpoints at both ends) */
@@ -111,7 +111,7 @@ public interface Drive {
         Require.finite(omega, "omega");
         Require.finite(phase, "phase");
         return Drives.make(t -> amplitude * Math.cos(omega * t + phase), new double[0],
-                fmt(amplitude) + "·cos(" + fmt(omega) + "t + " + fmt(phase) + ")", false);
+                fmt(amplitude) + "·cos(" + fmt(omega) + "t" + signed(phase) + ")", false);
     }
 
     /** @return a cos(ω t) */
@@ -125,7 +125,7 @@ public interface Drive {
         Require.finite(omega, "omega");
         Require.finite(phase, "phase");
         return Drives.make(t -> amplitude * Math.sin(omega * t + phase), new double[0],
-                fmt(amplitude) + "·sin(" + fmt(omega) + "t + " + fmt(phase) + ")", false);
+                fmt(amplitude) + "·sin(" + fmt(omega) + "t" + signed(phase) + ")", false);
     }
 
     /** @return a exp(−(t − t0)²/(2σ²)) */
@@ -220,6 +220,11 @@ public interface Drive {
         double lo = times[0], hi = times[times.length - 1], vlo = values[0], vhi = values[values.length - 1];
         return Drives.make(t -> t <= lo ? vlo : t >= hi ? vhi : f.value(t), times.clone(),
                 "spline(" + times.length + " knots)", false);
+    }
+
+    /** " + v" or " − |v|" (empty for 0), so that names read "cos(2t − 0.5000)" rather than "cos(2t + -0.5000)". */
+    private static String signed(double v) {
+        return v == 0 ? "" : (v > 0 ? " + " : " − ") + fmt(Math.abs(v));
     }
 
     private static String fmt(double v) {

@@ -145,39 +145,15 @@ public final class HilbertSpace {
         Require.nonNull(op, "op");
         Require.nonNull(traced, "traced");
         Require.sameDim(total, op.dim(), "op");
-        boolean[] out = new boolean[dims.length];
-        for (int q = 0; q < traced.length; q++) {
-            int s = Require.index(traced[q], dims.length, "traced[" + q + "]");
-            if (out[s]) {
-                throw InvalidInputException.of(Reason.OUT_OF_RANGE, "traced", "distinct subsystem indices",
-                        Arrays.toString(traced) + " (" + s + " repeated)");
-            }
-            out[s] = true;
-        }
-        // split every basis index into its kept and traced parts (mixed radix, subsystem 0 most significant)
-        int[] kept = new int[total], gone = new int[total];
+        boolean[] out = distinct(traced, "traced");
         int keptDim = 1;
         for (int s = 0; s < dims.length; s++) {
             if (!out[s]) {
                 keptDim *= dims[s];
             }
         }
-        for (int r = 0; r < total; r++) {
-            int rest = r, kStride = 1, gStride = 1, k = 0, g = 0;
-            for (int s = dims.length - 1; s >= 0; s--) {
-                int digit = rest % dims[s];
-                rest /= dims[s];
-                if (out[s]) {
-                    g += digit * gStride;
-                    gStride *= dims[s];
-                } else {
-                    k += digit * kStride;
-                    kStride *= dims[s];
-                }
-            }
-            kept[r] = k;
-            gone[r] = g;
-        }
+        int[] gone = new int[total], kept = new int[total];
+        split(traced, out, gone, kept);
         double[] re = new double[keptDim * keptDim], im = new double[keptDim * keptDim];
         for (int r = 0; r < total; r++) {
             for (int c = 0; c < total; c++) {
@@ -208,40 +184,14 @@ public final class HilbertSpace {
         if (subsystems.length == 0) {
             throw InvalidInputException.of(Reason.EMPTY, "subsystems", "at least one subsystem index", "none");
         }
-        boolean[] used = new boolean[dims.length];
+        boolean[] used = distinct(subsystems, "subsystems");
         int opDim = 1;
-        for (int q = 0; q < subsystems.length; q++) {
-            int s = Require.index(subsystems[q], dims.length, "subsystems[" + q + "]");
-            if (used[s]) {
-                throw InvalidInputException.of(Reason.OUT_OF_RANGE, "subsystems", "distinct subsystem indices",
-                        Arrays.toString(subsystems) + " (" + s + " repeated)");
-            }
-            used[s] = true;
-            opDim *= dims[s];
+        for (int q : subsystems) {
+            opDim *= dims[q];
         }
         Require.sameDim(opDim, op.dim(), "op");
-        // for every basis index: its index inside op (digits of the listed subsystems, in the listed order) and the
-        // index of the remaining digits, which op leaves untouched
         int[] inner = new int[total], outer = new int[total];
-        int[] digit = new int[dims.length];
-        for (int r = 0; r < total; r++) {
-            int rest = r;
-            for (int s = dims.length - 1; s >= 0; s--) {
-                digit[s] = rest % dims[s];
-                rest /= dims[s];
-            }
-            int in = 0, out = 0;
-            for (int q = 0; q < subsystems.length; q++) {
-                in = in * dims[subsystems[q]] + digit[subsystems[q]];
-            }
-            for (int s = 0; s < dims.length; s++) {
-                if (!used[s]) {
-                    out = out * dims[s] + digit[s];
-                }
-            }
-            inner[r] = in;
-            outer[r] = out;
-        }
+        split(subsystems, used, inner, outer);
         double[] re = new double[total * total], im = new double[total * total];
         for (int r = 0; r < total; r++) {
             for (int c = 0; c < total; c++) {
@@ -253,5 +203,45 @@ public final class HilbertSpace {
             }
         }
         return new Operator(total, re, im);
+    }
+
+    /**
+     * Splits every basis index r (mixed radix, subsystem 0 most significant) into listed[r], the index over the
+     * subsystems in {@code order} (in that order), and rest[r], the index over the others (in ascending order).
+     */
+    private void split(int[] order, boolean[] inOrder, int[] listed, int[] rest) {
+        int[] digit = new int[dims.length];
+        for (int r = 0; r < total; r++) {
+            int x = r;
+            for (int s = dims.length - 1; s >= 0; s--) {
+                digit[s] = x % dims[s];
+                x /= dims[s];
+            }
+            int a = 0, b = 0;
+            for (int s : order) {
+                a = a * dims[s] + digit[s];
+            }
+            for (int s = 0; s < dims.length; s++) {
+                if (!inOrder[s]) {
+                    b = b * dims[s] + digit[s];
+                }
+            }
+            listed[r] = a;
+            rest[r] = b;
+        }
+    }
+
+    /** Checks that the indices are valid and distinct; returns the set as a mask over the subsystems. */
+    private boolean[] distinct(int[] indices, String name) {
+        boolean[] mask = new boolean[dims.length];
+        for (int q = 0; q < indices.length; q++) {
+            int s = Require.index(indices[q], dims.length, name + "[" + q + "]");
+            if (mask[s]) {
+                throw InvalidInputException.of(Reason.OUT_OF_RANGE, name, "distinct subsystem indices",
+                        Arrays.toString(indices) + " (" + s + " repeated)");
+            }
+            mask[s] = true;
+        }
+        return mask;
     }
 }

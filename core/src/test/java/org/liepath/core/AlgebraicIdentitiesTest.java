@@ -42,7 +42,7 @@ class AlgebraicIdentitiesTest {
             assertEquals(Complex.ZERO, p.trace());
             assertTrue(p.isHermitian(0));
         }
-        // [σa, σb] = 2i ε_abc σc, tr(σaσb) = 2δab (CHECKS: Wikipedia "Structure constants")
+        // [σa, σb] = 2i ε_abc σc, tr(σaσb) = 2δab (Wikipedia, "Structure constants"; common practice)
         assertEquals(Z.timesI().scale(2), X.commutator(Y));
         assertEquals(new Complex(2, 0), X.inner(X));
         assertEquals(Complex.ZERO, X.inner(Y));
@@ -169,7 +169,8 @@ class AlgebraicIdentitiesTest {
         assertEquals(Operator.real(new double[][]{{0, 0, 0}, {0, 0, 1}, {0, 1, 0}}), gm.get(5), "λ6");
     }
 
-    /** f_abc as tabulated (a &lt; b &lt; c) in Wikipedia "Gell-Mann matrices", Commutation relations (via CHECKS §1.2). */
+    /** f_abc as tabulated (a &lt; b &lt; c) in Wikipedia "Gell-Mann matrices", Commutation relations, citing H. Haber,
+     * Properties of the Gell-Mann matrices, Physics 251 notes, UC Santa Cruz. */
     private static double[][][] referenceF() {
         double[][][] f = new double[8][8][8];
         double h = 0.5, r = Math.sqrt(3) / 2;
@@ -185,7 +186,7 @@ class AlgebraicIdentitiesTest {
         return f;
     }
 
-    /** d_abc (a ≤ b ≤ c), CHECKS §1.2 (commonly tabulated, e.g. Haber's Physics 251 notes [M]). */
+    /** d_abc (a ≤ b ≤ c), commonly tabulated (e.g. Haber's Physics 251 notes [M]); computed independently (SymPy). */
     private static double[][][] referenceD() {
         double[][][] d = new double[8][8][8];
         double s = 1 / Math.sqrt(3);
@@ -205,7 +206,7 @@ class AlgebraicIdentitiesTest {
 
     @Test
     void su3StructureConstantsMatchTheTables() {
-        // f_abc = −(i/4) tr(λa[λb,λc]), d_abc = (1/4) tr(λa{λb,λc}) (conventions of CHECKS §1.2: Wikipedia
+        // f_abc = −(i/4) tr(λa[λb,λc]), d_abc = (1/4) tr(λa{λb,λc}) (conventions of Wikipedia
         // "Gell-Mann matrices", citing H. Haber, Properties of the Gell-Mann matrices); all 512 entries, abs 1e-14
         List<Operator> gm = Levels.gellMann(3);
         double[][][] fRef = referenceF(), dRef = referenceD();
@@ -225,7 +226,7 @@ class AlgebraicIdentitiesTest {
             }
         }
         // contraction identities for su(N), N = 3: Σ f_acd f_bcd = N δab, Σ d_acd d_bcd = (N² − 4)/N δab,
-        // Σ f² = N(N² − 1) = 24, Σ d² = 40/3 (CHECKS §1.2, computed independently)
+        // Σ f² = N(N² − 1) = 24, Σ d² = 40/3 (computed independently with exact arithmetic)
         double sumF2 = 0, sumD2 = 0;
         for (int a = 0; a < 8; a++) {
             for (int b = 0; b < 8; b++) {
@@ -255,6 +256,30 @@ class AlgebraicIdentitiesTest {
                 }
                 close(rhs.timesI(), gm.get(a).commutator(gm.get(b)), 1e-14, "[λa, λb]");
             }
+        }
+    }
+
+    @Test
+    void gellMannBasesNest() {
+        // with the documented order, the first (d−1)² − 1 matrices of dimension d are those of dimension d−1 padded
+        // with a zero row and column, and the last one is diag(1, …, 1, −(d−1))·sqrt(2/(d(d−1))) (Bertlmann & Krammer
+        // 2008, eq. (5) [M])
+        for (int d = 3; d <= 6; d++) {
+            List<Operator> big = Levels.gellMann(d), small = Levels.gellMann(d - 1);
+            for (int a = 0; a < small.size(); a++) {
+                double[][] re = new double[d][d], im = new double[d][d];
+                for (int i = 0; i < d - 1; i++) {
+                    for (int j = 0; j < d - 1; j++) {
+                        re[i][j] = small.get(a).re(i, j);
+                        im[i][j] = small.get(a).im(i, j);
+                    }
+                }
+                assertEquals(Operator.of(re, im), big.get(a), "d = " + d + ", a = " + a);
+            }
+            double[] diag = new double[d];
+            java.util.Arrays.fill(diag, 1);
+            diag[d - 1] = -(d - 1);
+            close(Operator.diagonal(diag).scale(Math.sqrt(2.0 / (d * (d - 1.0)))), big.get(d * d - 2), 1e-15, "last");
         }
     }
 

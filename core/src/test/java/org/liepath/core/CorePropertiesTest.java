@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -198,6 +199,33 @@ class CorePropertiesTest {
         assertTrue(Superoperator.kraus(back).distance(ch) <= 1e-12, "round trip");
     }
 
+    @ParameterizedTest(name = "seed {0}")
+    @MethodSource("org.liepath.testing.Seeds#fewCases")
+    void randomGklsSteadyStatesAreDensityMatricesInTheKernel(long seed) {
+        // a generic GKLS generator (random H, two random jump operators) has a unique steady state, a density matrix
+        // (H. Spohn, Rep. Math. Phys. 10 (1976) 189 [M]); its positivity is checked with Commons Math eigenvalues
+        Random r = new Random(seed);
+        int n = 2 + r.nextInt(3);
+        Lindbladian l = Lindbladian.builder(Hamiltonian.constant(Seeds.randomHermitian(r, n)))
+                .jump(0.2 + r.nextDouble(), Seeds.randomMatrix(r, n)).jump(0.2 + r.nextDouble(), Seeds.randomMatrix(r, n))
+                .build();
+        Superoperator s = l.at(0);
+        Operator ss = l.steadyState();
+        double sn = s.matrix().norm();
+        assertTrue(s.apply(ss).norm() <= 1e-12 * sn, () -> "residual " + s.apply(ss).norm());
+        assertEquals(1.0, ss.trace().getReal(), 1e-13);
+        assertTrue(ss.isHermitian(0));
+        double[] ev = GklsReferenceTest.realEmbeddingEigenvalues(ss);
+        assertTrue(ev[0] >= -1e-12, () -> "min eigenvalue " + ev[0]);
+        // the channel of the generator is CP: its Choi → Kraus → superoperator round trip closes
+        Superoperator ch = s.exp(0.5);
+        List<Operator> ks = ch.krausOperators();
+        assertTrue(ks.size() <= n * n);
+        assertTrue(Superoperator.kraus(ks).distance(ch) <= 1e-11 * ch.matrix().norm(), "Kraus round trip");
+        // and the steady state is a fixed point of the channel
+        assertTrue(ch.apply(ss).distance(ss) <= 1e-12 * sn);
+    }
+
     static List<Operator> randomKraus(Random r, int n, int count) {
         int rows = n * count;
         double[][] vr = new double[rows][n], vi = new double[rows][n];
@@ -237,6 +265,31 @@ class CorePropertiesTest {
             ks.add(Operator.of(kr, ki));
         }
         return ks;
+    }
+
+    @ParameterizedTest(name = "seed {0}")
+    @MethodSource("org.liepath.testing.Seeds#fewCases")
+    void operationsNeverModifyTheirInputs(long seed) {
+        // immutability contract: every operation returns a new value and leaves its operands bit for bit unchanged
+        Random r = new Random(seed);
+        int n = 1 + r.nextInt(3);
+        Operator a = Seeds.randomMatrix(r, n), b = Seeds.randomMatrix(r, n);
+        double[] ar = a.reArray(), ai = a.imArray(), br = b.reArray(), bi = b.imArray();
+        Object[] results = {a.plus(b), a.minus(b), a.times(b), a.scale(2), a.scale(new Complex(0, 1)), a.timesI(),
+                a.dagger(), a.transpose(), a.conjugate(), a.commutator(b), a.anticommutator(b), a.trace(), a.inner(b),
+                a.norm(), a.norm1(), a.distance(b), a.kron(b), a.exp(), a.power(3), a.toEjml(), a.toString(),
+                Superoperator.sandwich(a, b).apply(b), Superoperator.kraus(List.of(a, b)).choi(),
+                HilbertSpace.of(n, n).partialTrace(a.kron(b), 0), Lindbladian.builder(Hamiltonian.constant(
+                        b.plus(b.dagger()))).jump(1, a).build().at(0).apply(b)};
+        assertEquals(25, results.length);
+        assertArrayEquals(ar, a.reArray(), 0);
+        assertArrayEquals(ai, a.imArray(), 0);
+        assertArrayEquals(br, b.reArray(), 0);
+        assertArrayEquals(bi, b.imArray(), 0);
+        // the zero-allocation coefficient call writes only its output
+        double[] out = {7, 7, 7};
+        Hamiltonian.builder(n).term(0.5, Operator.identity(n)).build().coefficients(1.0, out);
+        assertArrayEquals(new double[]{0.5, 7, 7}, out, 0);
     }
 
     @ParameterizedTest(name = "seed {0}")

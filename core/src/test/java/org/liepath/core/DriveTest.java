@@ -142,7 +142,12 @@ class DriveTest {
         assertArrayEquals(new double[]{0, 0.5, 1, 1.5, 2, 2.5}, a.plus(c).breakpoints(), 0);
         assertArrayEquals(new double[]{0, 1, 2}, a.plus(a).breakpoints(), 0);
         // names describe the composition
-        assertEquals("(1·cos(2t + 0) + piecewise(2 segments))", b.plus(a).name());
+        assertEquals("(1·cos(2t) + piecewise(2 segments))", b.plus(a).name());
+        assertEquals("2·sin(3t − 0.5000)", Drive.sine(2, 3, -0.5).name());
+        assertEquals("piecewise(2 segments)(t − 0.5000)", sh.name());
+        assertEquals("piecewise(2 segments)(t + 1)", a.shift(-1).name());
+        assertEquals("-3·piecewise(2 segments)", sc.name());
+        assertEquals("piecewise(2 segments)·1·cos(2t)", prod.name());
         assertEquals("pulse", a.named("pulse").name());
         assertEquals(a.at(0.5), a.named("pulse").at(0.5), 0);
         assertArrayEquals(a.breakpoints(), a.named("pulse").breakpoints(), 0);

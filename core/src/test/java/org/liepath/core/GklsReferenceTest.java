@@ -67,7 +67,7 @@ class GklsReferenceTest {
 
     @Test
     void decayAndDephasingGiveTheWorkedT1T2Numbers() {
-        // CHECKS §5.4 (computed independently): Γ = 1, γφ = 0.3 with L_φ = √(γφ/2)σz, t = 1.5, ρ(0) = |+⟩⟨+|:
+        // computed independently (mpmath) from the T1/T2 closed forms of Bloch 1946: Γ = 1, γφ = 0.3 with L_φ = √(γφ/2)σz, t = 1.5, ρ(0) = |+⟩⟨+|:
         // ρ_ee = ½e^{−1.5} = 0.111565080074214914, ρ_eg = ½e^{−(Γ/2+γφ)t} = ½e^{−1.2} = 0.150597105956101048
         Lindbladian l = Lindbladian.builder(zeroH(2)).jump(1.0, SIGMA_MINUS_EG).jump(0.15, Pauli.z()).build();
         Operator plus = StateVector.real(1, 1).normalized().toDensity();
@@ -86,7 +86,7 @@ class GklsReferenceTest {
 
     @Test
     void krausFormEqualsTheGklsEvolutionOnTheWorkedExample() {
-        // CHECKS §5.5: Γ = 1, t = 1.5 ⇒ γ = 1 − e^{−1.5} = 0.776869839851570171;
+        // worked example computed independently (mpmath, 40 digits): Γ = 1, t = 1.5 ⇒ γ = 1 − e^{−1.5} = 0.776869839851570171;
         // ρ = [[0.3, 0.2−0.1i],[0.2+0.1i, 0.7]] ↦ [[0.84380888789609912, 0.0944733105482029414 − 0.0472366552741014707i],
         // [c.c., 0.15619111210390088]] (Kraus and Lindblad agree to 40 digits there)
         double g = 1 - Math.exp(-1.5);
@@ -196,9 +196,11 @@ class GklsReferenceTest {
             "1, 0.5, 1, 0.3, 0.236686390532544379, 0.14792899408284, -0.236686390532544"})
     void opticalBlochSteadyStateMatchesTheTable(double omega, double delta, double gamma, double gphi,
                                                 double ree, double regRe, double regIm) {
-        // CHECKS §5.1: ρ_ee = (Ω²/4)/(Δ² + Ω²/2 + Γ²/4) (Foot, Atomic Physics, OUP 2005, §7.3 [M]); with dephasing
+        // ρ_ee = (Ω²/4)/(Δ² + Ω²/2 + Γ²/4) (Foot, Atomic Physics, OUP 2005, §7.3 [M]); with dephasing
         // (γ2 = Γ/2 + γφ) ρ_ee = ½(Ω²γ2/Γ)/(γ2² + Δ² + Ω²γ2/Γ). Rotating frame H = −(Δ/2)σz + (Ω/2)σx, |e⟩ = index 0,
-        // L = √Γσ−, L_φ = √(γφ/2)σz. The table's ρ_eg values are given to 14 digits, hence 1e-12.
+        // L = √Γσ−, L_φ = √(γφ/2)σz (also Allen & Eberly, Optical Resonance and Two-Level Atoms, Wiley 1975 [M]).
+        // Table values computed independently (mpmath null vector of the Liouvillian, 40 digits); the ρ_eg values
+        // are quoted to 14 digits, hence 1e-12.
         Hamiltonian h = Hamiltonian.builder(2).term(-delta / 2, Pauli.z()).term(omega / 2, Pauli.x()).build();
         Lindbladian.Builder b = Lindbladian.builder(h).jump(gamma, SIGMA_MINUS_EG);
         if (gphi > 0) {
@@ -216,6 +218,41 @@ class GklsReferenceTest {
         assertEquals(formula, ss.re(0, 0), 1e-14, "closed form");
         // L(ρ_ss) = 0
         assertTrue(l.at(0).apply(ss).norm() <= 1e-14);
+        // independently: the null vector of the 4×4 Liouvillian from Commons Math's SVD of its real 8×8 embedding
+        close(nullStateBySvd(l.at(0)), ss, 1e-13, "Commons Math null vector");
+    }
+
+    /**
+     * The trace-one null vector of a generator from the right singular vector of the smallest singular value of the
+     * real embedding [[A, −B],[B, A]] of S = A + iB (Commons Math SingularValueDecomposition): a real null vector
+     * (x; y) gives the complex null vector x + iy.
+     */
+    static Operator nullStateBySvd(Superoperator s) {
+        Operator m = s.matrix();
+        int nn = m.dim(), n = s.dim();
+        double[][] e = new double[2 * nn][2 * nn];
+        for (int i = 0; i < nn; i++) {
+            for (int k = 0; k < nn; k++) {
+                e[i][k] = m.re(i, k);
+                e[nn + i][nn + k] = m.re(i, k);
+                e[i][nn + k] = -m.im(i, k);
+                e[nn + i][k] = m.im(i, k);
+            }
+        }
+        org.apache.commons.math3.linear.SingularValueDecomposition svd =
+                new org.apache.commons.math3.linear.SingularValueDecomposition(new Array2DRowRealMatrix(e, false));
+        double[] sv = svd.getSingularValues(); // descending
+        assertTrue(sv[2 * nn - 1] <= 1e-13 * sv[0] && sv[2 * nn - 3] > 1e-8 * sv[0], "a two-dimensional real kernel");
+        double[] v = svd.getV().getColumn(2 * nn - 1);
+        double[][] re = new double[n][n], im = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                re[i][j] = v[i + n * j];
+                im[i][j] = v[nn + i + n * j];
+            }
+        }
+        Operator rho = Operator.of(re, im);
+        return rho.scale(rho.trace().reciprocal());
     }
 
     @ParameterizedTest(name = "t = {0}")
@@ -224,7 +261,7 @@ class GklsReferenceTest {
             "2, 0.28186689768765842, 0.192940481530519, -0.3583900322055541",
             "5, 0.25118781368886936, 0.24450753083506668, -0.23899412144258958"})
     void opticalBlochTransientMatchesTheTable(double t, double ree, double regRe, double regIm) {
-        // CHECKS §5.2 (computed independently, expm of the Liouvillian, DOP853 agrees to 1e-13): Ω = 1, Δ = 0.5, Γ = 1,
+        // computed independently (mpmath expm of the Liouvillian; an explicit Runge–Kutta DOP853 run agrees to 1e-13): Ω = 1, Δ = 0.5, Γ = 1,
         // ρ(0) = |g⟩⟨g|
         Hamiltonian h = Hamiltonian.builder(2).term(-0.25, Pauli.z()).term(0.5, Pauli.x()).build();
         Lindbladian l = Lindbladian.builder(h).jump(1.0, SIGMA_MINUS_EG).build();
@@ -237,7 +274,7 @@ class GklsReferenceTest {
 
     @Test
     void longTimeLimitOfTheTransientIsTheSteadyState() {
-        // CHECKS §5.2 last row: t → ∞ gives 0.25 and 0.25 − 0.25i (formula 5.1)
+        // t → ∞ gives ρ_ee = 0.25, ρ_eg = 0.25 − 0.25i (the steady-state formula above, Foot 2005 §7.3 [M])
         Hamiltonian h = Hamiltonian.builder(2).term(-0.25, Pauli.z()).term(0.5, Pauli.x()).build();
         Lindbladian l = Lindbladian.builder(h).jump(1.0, SIGMA_MINUS_EG).build();
         Operator late = l.at(0).exp(80).apply(Operator.unit(2, 1, 1));

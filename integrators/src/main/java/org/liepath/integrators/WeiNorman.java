@@ -8,6 +8,7 @@ import org.liepath.core.InvalidInputException.Reason;
 import org.liepath.core.Operator;
 import org.liepath.core.ProgressListener;
 import org.liepath.core.internal.Require;
+import org.liepath.algebra.LieAlgebra;
 import org.liepath.integrators.internal.wn.Chart;
 import org.liepath.integrators.internal.wn.Driver;
 import org.liepath.integrators.internal.wn.Symbolic;
@@ -115,6 +116,19 @@ public final class WeiNorman {
                             + "]) with a relative component " + d.residual + " outside the span");
         }
         return new WeiNorman(Collections.unmodifiableList(copy), c, DEFAULT_MAX_CONDITION, DEFAULT_MAX_GROWTH);
+    }
+
+    /**
+     * A chart for the basis of an algebra, in the algebra's own order. For a dynamical Lie algebra
+     * ({@code LieAlgebra.generatedBy(h)}) the basis is anti-Hermitian and orthonormal, so the coordinates of a Hermitian
+     * H stay real; for a ladder ordering with Riccati equations use {@link #of(List)} with the ordering of your choice
+     * or one from {@link WeiNormanOrderings}. The structure constants are recomputed from the basis.
+     *
+     * @throws InvalidInputException NULL
+     */
+    public static WeiNorman of(LieAlgebra algebra) {
+        Require.nonNull(algebra, "algebra");
+        return of(algebra.basis());
     }
 
     /**

@@ -7,8 +7,10 @@ import org.liepath.core.Operator;
 import org.liepath.core.StateVector;
 import org.liepath.core.Superoperator;
 import org.liepath.core.internal.Require;
+import org.liepath.integrators.Trajectory;
 import org.liepath.validation.internal.HermitianSpectrum;
 
+import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -172,6 +174,31 @@ public final class Fidelity {
         double[] out = new double[trajectory.size()];
         for (int k = 0; k < out.length; k++) {
             out[k] = entropy(Require.nonNull(trajectory.get(k), "trajectory[" + k + "]"));
+        }
+        return out;
+    }
+
+    /**
+     * Purity of each sample of a density-mode trajectory ({@code Evolve.of(l)…density(rho0).sampleAt(…)}). Samples
+     * are symmetrised, (ρ + ρ†)/2, so that integration round-off in the Hermitian part does not count as misuse.
+     *
+     * @throws IllegalStateException if the trajectory does not hold densities (from {@link Trajectory#density})
+     */
+    public static double[] purity(Trajectory trajectory) {
+        return purity(densities(trajectory));
+    }
+
+    /** Entropy of each sample of a density-mode trajectory, as {@link #purity(Trajectory)}. */
+    public static double[] entropy(Trajectory trajectory) {
+        return entropy(densities(trajectory));
+    }
+
+    private static List<Operator> densities(Trajectory trajectory) {
+        Require.nonNull(trajectory, "trajectory");
+        List<Operator> out = new ArrayList<>(trajectory.size());
+        for (int k = 0; k < trajectory.size(); k++) {
+            Operator r = trajectory.density(k);
+            out.add(r.plus(r.dagger()).scale(0.5));
         }
         return out;
     }

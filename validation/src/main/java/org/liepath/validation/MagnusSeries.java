@@ -40,8 +40,9 @@ import java.util.TreeSet;
  * evaluated at the same 12 Gauss–Legendre nodes by interpolatory (spectral) integration: ∫ from the panel start to each
  * node of the degree-11 interpolant of the integrand. Hence the result is exact up to rounding whenever A is a
  * polynomial of degree p with 4p + 3 ≤ 11 on each panel (p ≤ 2: linear A(t) gives Ω4' of degree 7), and converges
- * geometrically with the panel width for analytic drives; the tests confirm the closed forms for linear A to ~1e-15
- * and agreement between node counts to ~1e-13 for smooth pulses.
+ * geometrically with the panel width for analytic drives. The tests confirm the closed forms for linear A and the
+ * Baker–Campbell–Hausdorff terms for piecewise-constant A to 1e-13 relative, invariance of Ω1 … Ω4 under 40 extra
+ * panel cuts to 1e-12, and the ε⁵ scaling of log U − (Ω1 + … + Ω4) against an independent ODE solution.
  *
  * <p><b>Convergence.</b> {@link #convergenceIndicator()} is ∫‖H(t)‖₂ dt (= ∫‖A‖₂); the series converges when it is
  * below π (P.C. Moan, J. Niesen, Found. Comput. Math. 8 (2008) 291; Blanes et al. 2009). The condition is sufficient,

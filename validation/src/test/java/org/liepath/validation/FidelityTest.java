@@ -227,6 +227,30 @@ class FidelityTest {
         assertEquals(ent, Fidelity.entropy(rho), 1e-12);
     }
 
+    /**
+     * Purity and entropy over a density trajectory of amplitude damping (L = √Γ|0⟩⟨1|, H = 0) from |1⟩⟨1|: the state
+     * stays diagonal with ρ11 = e^{−Γt} (H.-P. Breuer, F. Petruccione, The Theory of Open Quantum Systems, OUP 2002,
+     * ch. 3 — from memory), so purity = p² + (1 − p)² and entropy = −p ln p − (1 − p) ln(1 − p). The adaptive run at
+     * tolerance 1e-12 is accurate to ~1e-11; tolerance 1e-9.
+     */
+    @Test
+    void purityAndEntropyOverTrajectory() {
+        double gamma = 0.8;
+        org.liepath.core.Lindbladian l = org.liepath.core.Lindbladian
+                .builder(org.liepath.core.Hamiltonian.constant(Operator.zero(2))).jump(gamma, Operator.unit(2, 0, 1)).build();
+        double[] times = {0, 0.5, 1, 2, 3};
+        var traj = org.liepath.integrators.Evolve.of(l).over(0, 3).tolerance(1e-12)
+                .density(Operator.unit(2, 1, 1)).sampleAt(times).run().trajectory();
+        double[] pur = Fidelity.purity(traj), ent = Fidelity.entropy(traj);
+        assertEquals(times.length, pur.length);
+        for (int k = 0; k < times.length; k++) {
+            double p = Math.exp(-gamma * traj.time(k));
+            assertEquals(p * p + (1 - p) * (1 - p), pur[k], 1e-9, "t = " + traj.time(k));
+            double h = (p > 0 && p < 1) ? -p * Math.log(p) - (1 - p) * Math.log(1 - p) : 0;
+            assertEquals(h, ent[k], 1e-9, "t = " + traj.time(k));
+        }
+    }
+
     private static double det2(Operator m) {
         return m.times(Operator.identity(2)).re(0, 0) * m.re(1, 1) - (m.re(0, 1) * m.re(0, 1) + m.im(0, 1) * m.im(0, 1));
     }

@@ -36,37 +36,52 @@ class JShellScriptTest {
                 }
             }
             evalAll(js, Files.readString(DIR.resolve("liepath-startup.jsh")), "liepath-startup.jsh", buf);
-            evalAll(js, Files.readString(DIR.resolve("example.jsh")), "example.jsh", buf);
+            // JShell commands such as the closing /exit are for the jshell tool, not snippets: drop them here
+            String example = Files.readString(DIR.resolve("example.jsh")).lines()
+                    .filter(line -> !line.startsWith("/")).collect(Collectors.joining("\n"));
+            evalAll(js, example, "example.jsh", buf);
         }
         String printed = buf.toString(StandardCharsets.UTF_8);
         assertTrue(printed.contains("unitarity error"), printed);
         assertTrue(printed.contains("type "), printed);
     }
 
+    /**
+     * Feeds the source line by line as the jshell tool does: a snippet runs as soon as the lines read so far form a
+     * complete one, so a statement continued on the next line must leave its first line incomplete.
+     */
     private static void evalAll(JShell js, String source, String file, ByteArrayOutputStream buf) {
-        String rest = source;
         SourceCodeAnalysis sca = js.sourceCodeAnalysis();
-        while (true) {
-            SourceCodeAnalysis.CompletionInfo ci = sca.analyzeCompletion(rest);
+        StringBuilder pending = new StringBuilder();
+        int lineNo = 0;
+        for (String line : source.split("\n", -1)) {
+            lineNo++;
+            pending.append(line).append('\n');
+            SourceCodeAnalysis.CompletionInfo ci = sca.analyzeCompletion(pending.toString());
             if (ci.completeness() == SourceCodeAnalysis.Completeness.EMPTY) {
-                return;
+                pending.setLength(0);
+                continue;
             }
             if (!ci.completeness().isComplete()) {
-                fail(file + ": incomplete snippet at end of file: " + rest.strip());
+                continue;
             }
             String snippet = ci.source();
             for (SnippetEvent e : js.eval(snippet)) {
                 if (e.status() == Snippet.Status.REJECTED) {
                     String diags = js.diagnostics(e.snippet()).map(d -> d.getMessage(null))
                             .collect(Collectors.joining("; "));
-                    fail(file + ": snippet rejected: " + snippet.strip() + " — " + diags);
+                    fail(file + ":" + lineNo + ": snippet rejected: " + snippet.strip() + " — " + diags);
                 }
                 if (e.exception() != null) {
-                    fail(file + ": snippet threw " + e.exception() + ": " + snippet.strip() + "\noutput so far:\n"
-                            + buf.toString(StandardCharsets.UTF_8));
+                    fail(file + ":" + lineNo + ": snippet threw " + e.exception() + ": " + snippet.strip()
+                            + "\noutput so far:\n" + buf.toString(StandardCharsets.UTF_8));
                 }
             }
-            rest = ci.remaining();
+            pending.setLength(0);
+            pending.append(ci.remaining());
+        }
+        if (!pending.toString().isBlank()) {
+            fail(file + ": incomplete snippet at end of file: " + pending.toString().strip());
         }
     }
 }

@@ -25,41 +25,42 @@ import java.util.List;
  *   sign ε on the orbit, hence the parity constraint ∏ t_k = ε·(−1)^{|A|/2}; every sign vector satisfying all such
  *   constraints occurs exactly once, and their number is checked against the size of the orbit.</li>
  *   <li>Roots of different simple ideals are orthogonal, and the roots of one simple ideal form an irreducible
- *   system, so the simple ideals are the connected components of "non-orthogonal" among roots. The rank of each is
- *   the rank of its root vectors (computed modulo the prime 2^31 − 1; certified because the ranks must add up to
- *   r minus the centre's dimension, and a rank modulo p never exceeds the rational rank).</li>
+ *   system. A basis of the root space is picked among the roots by elimination modulo the prime 2^31 − 1 (vectors
+ *   independent modulo p are independent over the rationals; the basis must have r − dim(centre) elements, which
+ *   certifies it); the simple ideals are the classes of basis roots linked through some root that is not orthogonal
+ *   to them, and the rank of an ideal is its number of basis roots.</li>
  *   <li>A component with N roots of rank k is named by (N, k, root lengths): one length: A_k with N = k(k+1),
  *   D_k (k ≥ 4) with 2k(k−1), E6 with 72, E7 with 126, E8 with 240; two lengths of squared ratio 2: B_k with 2k²
  *   roots of which 2k short, C_k (k ≥ 3) with 2k² roots of which 2k(k−1) short, F4 with 48; ratio 3: G2 with 12.</li>
  * </ol>
  */
 public final class StringTypes {
-    /** Above this many roots the pairwise orthogonality test (quadratic) is not attempted. */
-    public static final int MAX_ROOTS = 16_000;
+    /** Above this many roots (dimension minus rank) the root system is not built. */
+    public static final int MAX_ROOTS = 200_000;
     private static final long PRIME = 2147483647L;
 
     private StringTypes() {
     }
 
-    /** @return the type of the algebra spanned by all strings of {@code t} (which must be closed), or "unknown" */
-    public static String identify(StringTable t) {
+    /**
+     * @param t          a set of strings closed under the bracket
+     * @param generators the first {@code generators} entries of t generate it as a Lie algebra (t.size() if unsure)
+     * @return the type of the algebra spanned by all strings of {@code t}, or "unknown"
+     */
+    public static String identify(StringTable t, int generators) {
         int d = t.size();
         if (d == 0) {
             return "0";
         }
         int w = t.words();
+        // central = commutes with every generator (then with all brackets of them, by the Jacobi identity)
         boolean[] central = new boolean[d];
-        Arrays.fill(central, true);
-        int[] partners = new int[64];
-        int[] np = new int[1];
         for (int i = 0; i < d; i++) {
-            partners = t.anticommutingWith(i, i, partners, np);
-            if (np[0] > 0) {
-                central[i] = false;
+            boolean c = true;
+            for (int g = 0; g < generators && c; g++) {
+                c = !t.anticommute(i, g);
             }
-            for (int e = 0; e < np[0]; e++) {
-                central[partners[e]] = false;
-            }
+            central[i] = c;
         }
         int z = 0;
         long[] support = new long[w];
@@ -96,8 +97,8 @@ public final class StringTypes {
         for (String[] f : factors) {
             sb.append(sb.length() == 0 ? "" : " ⊕ ").append(f[0]);
         }
-        for (int k = 0; k < z; k++) {
-            sb.append(sb.length() == 0 ? "" : " ⊕ ").append("u(1)");
+        if (z > 0) {
+            sb.append(sb.length() == 0 ? "" : " ⊕ ").append(z == 1 ? "u(1)" : "u(1)^" + z);
         }
         return sb.toString();
     }
@@ -220,47 +221,113 @@ public final class StringTypes {
             return null;
         }
         nRoots = m;
-        // components of the non-orthogonality graph
-        int[] parent = new int[nRoots];
-        for (int i = 0; i < nRoots; i++) {
-            parent[i] = i;
-        }
-        for (int i = 0; i < nRoots; i++) {
-            for (int j = 0; j < i; j++) {
-                long dot = 0;
-                for (int k = 0; k < rw; k++) {
-                    long pi = pos[i * rw + k], ni = neg[i * rw + k], pj = pos[j * rw + k], nj = neg[j * rw + k];
-                    dot += Long.bitCount(pi & pj) + Long.bitCount(ni & nj) - Long.bitCount(pi & nj)
-                            - Long.bitCount(ni & pj);
-                }
-                if (dot != 0) {
-                    union(parent, i, j);
+        // a basis of the root space among the roots (independent modulo p, hence over the rationals); it must have
+        // r − z elements, the rank of the semisimple part, which certifies it
+        int[] basisRoot = new int[r];
+        long[][] basisVec = new long[r][];
+        int[] lead = new int[r];
+        int nb = 0;
+        for (int i = 0; i < nRoots && nb < r - z; i++) {
+            long[] v = vector(i, pos, neg, rw, r);
+            for (int b = 0; b < nb; b++) {
+                long f = v[lead[b]];
+                if (f != 0) {
+                    long[] bv = basisVec[b];
+                    for (int k = 0; k < r; k++) {
+                        v[k] = Math.floorMod(v[k] - f * bv[k], PRIME);
+                    }
                 }
             }
+            int l = -1;
+            for (int k = 0; k < r && l < 0; k++) {
+                if (v[k] != 0) {
+                    l = k;
+                }
+            }
+            if (l >= 0) {
+                long inv = modInverse(v[l]);
+                for (int k = 0; k < r; k++) {
+                    v[k] = v[k] * inv % PRIME;
+                }
+                basisVec[nb] = v;
+                lead[nb] = l;
+                basisRoot[nb++] = i;
+            }
         }
-        List<List<Integer>> comps = new ArrayList<>();
-        int[] compOf = new int[nRoots];
-        Arrays.fill(compOf, -1);
+        if (nb != r - z) {
+            return null;
+        }
+        // simple ideals = components of "non-orthogonal" among the basis roots, each root joining the basis roots it
+        // is not orthogonal to (they all lie in its ideal; a split inside one ideal would split its root system
+        // orthogonally, which an irreducible root system does not allow)
+        int[] parent = new int[nb];
+        for (int b = 0; b < nb; b++) {
+            parent[b] = b;
+        }
+        int[] attach = new int[nRoots];
         for (int i = 0; i < nRoots; i++) {
-            int root = find(parent, i);
+            attach[i] = -1;
+            for (int b = 0; b < nb; b++) {
+                if (dot(i, basisRoot[b], pos, neg, rw) != 0) {
+                    if (attach[i] < 0) {
+                        attach[i] = b;
+                    } else {
+                        union(parent, attach[i], b);
+                    }
+                }
+            }
+            if (attach[i] < 0) {
+                return null; // a non-zero root is orthogonal to no basis of the root space
+            }
+        }
+        int[] compOf = new int[nb];
+        Arrays.fill(compOf, -1);
+        List<List<Integer>> comps = new ArrayList<>();
+        int[] compRank = new int[nb];
+        for (int b = 0; b < nb; b++) {
+            int root = find(parent, b);
             if (compOf[root] < 0) {
                 compOf[root] = comps.size();
                 comps.add(new ArrayList<>());
             }
-            comps.get(compOf[root]).add(i);
+            compRank[compOf[root]]++;
+        }
+        for (int i = 0; i < nRoots; i++) {
+            comps.get(compOf[find(parent, attach[i])]).add(i);
         }
         List<String[]> out = new ArrayList<>();
-        int rankSum = 0;
-        for (List<Integer> c : comps) {
-            int k = rankModP(c, pos, neg, rw, r);
-            rankSum += k;
-            String name = name(c, lengths, k);
+        for (int c = 0; c < comps.size(); c++) {
+            int k = compRank[c];
+            String name = name(comps.get(c), lengths, k);
             if (name == null) {
                 return null;
             }
-            out.add(new String[]{name, Integer.toString(k + 2 * c.size())});
+            out.add(new String[]{name, Integer.toString(k + 2 * comps.get(c).size())});
         }
-        return rankSum == r - z ? out : null;
+        return out;
+    }
+
+    private static long dot(int i, int j, long[] pos, long[] neg, int rw) {
+        long dot = 0;
+        for (int k = 0; k < rw; k++) {
+            long pi = pos[i * rw + k], ni = neg[i * rw + k], pj = pos[j * rw + k], nj = neg[j * rw + k];
+            dot += Long.bitCount(pi & pj) + Long.bitCount(ni & nj) - Long.bitCount(pi & nj) - Long.bitCount(ni & pj);
+        }
+        return dot;
+    }
+
+    /** Root i as a vector modulo p: +1 / −1 (= p − 1) on its support. */
+    private static long[] vector(int i, long[] pos, long[] neg, int rw, int r) {
+        long[] v = new long[r];
+        for (int k = 0; k < r; k++) {
+            long bit = 1L << (k & 63);
+            if ((pos[i * rw + (k >>> 6)] & bit) != 0) {
+                v[k] = 1;
+            } else if ((neg[i * rw + (k >>> 6)] & bit) != 0) {
+                v[k] = PRIME - 1;
+            }
+        }
+        return v;
     }
 
     /** out ← P·cur (string part) and returns the phase exponent of P·cur. */
@@ -390,50 +457,6 @@ public final class StringTypes {
             out.add(u);
         }
         return out;
-    }
-
-    private static int rankModP(List<Integer> comp, long[] pos, long[] neg, int rw, int r) {
-        List<long[]> basis = new ArrayList<>();
-        List<Integer> lead = new ArrayList<>();
-        for (int i : comp) {
-            long[] v = new long[r];
-            for (int k = 0; k < r; k++) {
-                long bit = 1L << (k & 63);
-                if ((pos[i * rw + (k >>> 6)] & bit) != 0) {
-                    v[k] = 1;
-                } else if ((neg[i * rw + (k >>> 6)] & bit) != 0) {
-                    v[k] = PRIME - 1;
-                }
-            }
-            for (int b = 0; b < basis.size(); b++) {
-                int l = lead.get(b);
-                if (v[l] != 0) {
-                    long f = v[l];
-                    long[] bv = basis.get(b);
-                    for (int k = 0; k < r; k++) {
-                        v[k] = Math.floorMod(v[k] - f * bv[k], PRIME);
-                    }
-                }
-            }
-            int l = -1;
-            for (int k = 0; k < r && l < 0; k++) {
-                if (v[k] != 0) {
-                    l = k;
-                }
-            }
-            if (l >= 0) {
-                long inv = modInverse(v[l]);
-                for (int k = 0; k < r; k++) {
-                    v[k] = v[k] * inv % PRIME;
-                }
-                basis.add(v);
-                lead.add(l);
-                if (basis.size() == r) {
-                    break;
-                }
-            }
-        }
-        return basis.size();
     }
 
     private static long modInverse(long a) {

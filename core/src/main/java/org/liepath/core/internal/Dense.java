@@ -12,12 +12,16 @@ public final class Dense {
      * c = a·b. Outputs must not alias inputs. Cost 8n³ flops.
      *
      * <p>Kernel choice (measured with JMH in the benchmarks module, {@code MatMulBenchmark}): n = 2 is fully
-     * unrolled; otherwise an i-k-j loop on the planar arrays with two k-rows of b per pass, so each row of c is
+     * unrolled, n = 4 keeps a row of c in registers; otherwise an i-k-j loop on the planar arrays with two k-rows of b per pass, so each row of c is
      * loaded and stored half as often and the j loop (unit stride in b and c) is vectorised by the JIT.
      */
     public static void mul(int n, double[] ar, double[] ai, double[] br, double[] bi, double[] cr, double[] ci) {
         if (n == 2) {
             mul2(ar, ai, br, bi, cr, ci);
+            return;
+        }
+        if (n == 4) {
+            mul4(ar, ai, br, bi, cr, ci);
             return;
         }
         for (int i = 0; i < n; i++) {
@@ -46,6 +50,35 @@ public final class Dense {
                     ci[in + j] += xr * pim + xi * pr;
                 }
             }
+        }
+    }
+
+    /** n = 4: one row of c in eight register accumulators (the j loop is too short for the vectoriser). */
+    private static void mul4(double[] ar, double[] ai, double[] br, double[] bi, double[] cr, double[] ci) {
+        for (int i = 0; i < 16; i += 4) {
+            double r0 = 0, r1 = 0, r2 = 0, r3 = 0, i0 = 0, i1 = 0, i2 = 0, i3 = 0;
+            for (int k = 0; k < 4; k++) {
+                double xr = ar[i + k], xi = ai[i + k];
+                int o = 4 * k;
+                double p0 = br[o], p1 = br[o + 1], p2 = br[o + 2], p3 = br[o + 3];
+                double q0 = bi[o], q1 = bi[o + 1], q2 = bi[o + 2], q3 = bi[o + 3];
+                r0 += xr * p0 - xi * q0;
+                i0 += xr * q0 + xi * p0;
+                r1 += xr * p1 - xi * q1;
+                i1 += xr * q1 + xi * p1;
+                r2 += xr * p2 - xi * q2;
+                i2 += xr * q2 + xi * p2;
+                r3 += xr * p3 - xi * q3;
+                i3 += xr * q3 + xi * p3;
+            }
+            cr[i] = r0;
+            cr[i + 1] = r1;
+            cr[i + 2] = r2;
+            cr[i + 3] = r3;
+            ci[i] = i0;
+            ci[i + 1] = i1;
+            ci[i + 2] = i2;
+            ci[i + 3] = i3;
         }
     }
 
@@ -83,9 +116,21 @@ public final class Dense {
         for (int j = 0; j < n; j++) {
             double s = 0;
             for (int i = 0; i < n; i++) {
-                s += Math.hypot(re[i * n + j], im[i * n + j]);
+                double a = re[i * n + j], b = im[i * n + j];
+                s += Math.sqrt(a * a + b * b);
             }
             best = Math.max(best, s);
+        }
+        // the plain modulus overflows only for entries beyond 1e154; redo those (rare) cases with hypot
+        if (best == Double.POSITIVE_INFINITY) {
+            best = 0;
+            for (int j = 0; j < n; j++) {
+                double s = 0;
+                for (int i = 0; i < n; i++) {
+                    s += Math.hypot(re[i * n + j], im[i * n + j]);
+                }
+                best = Math.max(best, s);
+            }
         }
         return best;
     }
@@ -156,21 +201,29 @@ public final class Dense {
                 }
             }
         }
-        // back substitution
+        // back substitution by rows: row k of x = (row k of b − Σ_{m>k} u_km · row m of x) / u_kk, so every inner
+        // loop runs with unit stride over a row of b
         for (int k = n - 1; k >= 0; k--) {
-            double dr = ar[k * n + k], di = ai[k * n + k];
+            int kn = k * n;
+            for (int m = k + 1; m < n; m++) {
+                double ur = ar[kn + m], ui = ai[kn + m];
+                if (ur == 0 && ui == 0) {
+                    continue;
+                }
+                int mn = m * n;
+                for (int j = 0; j < n; j++) {
+                    double xr = br[mn + j], xi = bi[mn + j];
+                    br[kn + j] -= ur * xr - ui * xi;
+                    bi[kn + j] -= ur * xi + ui * xr;
+                }
+            }
+            double dr = ar[kn + k], di = ai[kn + k];
             double den = dr * dr + di * di;
             double invr = dr / den, invi = -di / den;
             for (int j = 0; j < n; j++) {
-                double sr = br[k * n + j], si = bi[k * n + j];
-                for (int m = k + 1; m < n; m++) {
-                    double ur = ar[k * n + m], ui = ai[k * n + m];
-                    double xr = br[m * n + j], xi = bi[m * n + j];
-                    sr -= ur * xr - ui * xi;
-                    si -= ur * xi + ui * xr;
-                }
-                br[k * n + j] = sr * invr - si * invi;
-                bi[k * n + j] = sr * invi + si * invr;
+                double sr = br[kn + j], si = bi[kn + j];
+                br[kn + j] = sr * invr - si * invi;
+                bi[kn + j] = sr * invi + si * invr;
             }
         }
         return true;

@@ -6,7 +6,10 @@ package org.liepath.core.internal;
  * <p>Method: N.J. Higham, "The scaling and squaring method for the matrix exponential revisited", SIAM J. Matrix
  * Anal. Appl. 26(4) (2005) 1179–1193: degree m ∈ {3, 5, 7, 9} is used when ‖A‖₁ ≤ θ_m, otherwise A is scaled by 2^-s
  * so that ‖2^-s A‖₁ ≤ θ_13, r_13 is evaluated with six products and one LU solve, and the result squared s times.
- * θ_m and the Padé coefficients b_j = (2m−j)!/((m−j)! j!) are the published double-precision values.
+ * θ_m and the Padé coefficients b_j = (2m−j)!/((m−j)! j!) are the published double-precision values. The powers
+ * A², A⁴ formed for the degree tests are reused (rescaled by 2^{-2s}, 2^{-4s}) after scaling, as in the paper.
+ * Orders 1 and 2 use closed forms ({@link #exp2}), which are exact to rounding also for defective and nearly
+ * degenerate 2×2 matrices.
  *
  * <p>A workspace object holds every scratch array, so repeated calls at one dimension allocate nothing. Instances are
  * not thread-safe; use one per thread. Not part of the public API.

@@ -26,6 +26,7 @@ public final class Chart {
     public final double[][] adRe, adIm;
     public final ExpForm[] adExp;
     public final FactorExp[] factor;
+    private final double[][][] links;
 
     /** Thrown (internally) with the index of a dependent element or the indices of a bracket outside the span. */
     public static final class Defect extends Exception {
@@ -148,6 +149,17 @@ public final class Chart {
             adExp[k] = new ExpForm(m, adRe[k], adIm[k]);
             factor[k] = new FactorExp(n, bRe[k], bIm[k]);
         }
+        // V_k† V_{k+1} for consecutive diagonalised factors: the product of their exponentials then costs one
+        // matrix product instead of two
+        links = new double[m][][];
+        for (int k = 0; k + 1 < m; k++) {
+            if (factor[k].isNormal() && factor[k + 1].isNormal()) {
+                double[][] a = factor[k].eigenvectorsDagger(), b = factor[k + 1].eigenvectors();
+                double[] lr = new double[len], li = new double[len];
+                Small.mulLarge(n, a[0], a[1], b[0], b[1], lr, li);
+                links[k] = new double[][]{lr, li};
+            }
+        }
     }
 
     /**
@@ -205,7 +217,7 @@ public final class Chart {
         final int[] piv;
         final Expm admExp;
         Expm bigExp;
-        double[] accR, accI, facR, facI, tmpR, tmpI, scR, scI;
+        double[] accR, accI, facR, facI, tmpR, tmpI, scR, scI, dR, dI;
 
         public Work(Chart c) {
             this.c = c;
@@ -295,7 +307,11 @@ public final class Chart {
         return p;
     }
 
-    /** out (planar N×N) = exp(g_1X_1)…exp(g_mX_m). Allocates its scratch in w on first use only. */
+    /**
+     * out (planar N×N) = exp(g_1X_1)…exp(g_mX_m). Diagonal factors scale columns; a diagonalised factor
+     * V diag(e^{gμ}) V† is applied as a product with V (or with the precomputed V_k†V_{k+1} after another such
+     * factor), a scaling, and a pending V† flushed at the end. Allocates its scratch in w on first use only.
+     */
     public void reconstruct(double[] g, double[] outR, double[] outI, Work w) {
         int len = n * n;
         if (w.accR == null) {
@@ -307,6 +323,8 @@ public final class Chart {
             w.tmpI = new double[len];
             w.scR = new double[len];
             w.scI = new double[len];
+            w.dR = new double[n];
+            w.dI = new double[n];
         }
         if (w.bigExp == null) {
             for (int k = 0; k < m; k++) {
@@ -317,21 +335,87 @@ public final class Chart {
             }
         }
         Dense.identity(n, w.accR, w.accI);
+        int state = 0; // 0: acc = I, 1: acc diagonal, 2: dense
+        int pending = -1; // factor whose V† still multiplies acc from the right
         for (int k = 0; k < m; k++) {
             double zr = g[2 * k], zi = g[2 * k + 1];
             if (zr == 0 && zi == 0) {
                 continue;
             }
-            factor[k].eval(zr, zi, w.facR, w.facI, w.bigExp, w.scR, w.scI);
-            Dense.mul(n, w.accR, w.accI, w.facR, w.facI, w.tmpR, w.tmpI);
-            double[] s = w.accR;
-            w.accR = w.tmpR;
-            w.tmpR = s;
-            s = w.accI;
-            w.accI = w.tmpI;
-            w.tmpI = s;
+            FactorExp f = factor[k];
+            if (f.isNormal()) {
+                double[][] right;
+                if (pending >= 0 && pending == k - 1 && links[pending] != null) {
+                    right = links[pending];
+                } else {
+                    state = flush(pending, state, w);
+                    right = f.eigenvectors();
+                }
+                pending = -1;
+                state = timesRight(right[0], right[1], state, w);
+                f.spectralFactors(zr, zi, w.dR, w.dI);
+                scaleColumns(w.accR, w.accI, w.dR, w.dI);
+                pending = k;
+                continue;
+            }
+            state = flush(pending, state, w);
+            pending = -1;
+            if (f.isDiagonal()) {
+                f.eval(zr, zi, w.facR, w.facI, w.bigExp, w.scR, w.scI);
+                for (int d = 0; d < n; d++) {
+                    w.dR[d] = w.facR[d * n + d];
+                    w.dI[d] = w.facI[d * n + d];
+                }
+                scaleColumns(w.accR, w.accI, w.dR, w.dI);
+                state = Math.max(state, 1);
+            } else {
+                f.eval(zr, zi, w.facR, w.facI, w.bigExp, w.scR, w.scI);
+                state = timesRight(w.facR, w.facI, state, w);
+            }
         }
+        flush(pending, state, w);
         System.arraycopy(w.accR, 0, outR, 0, len);
         System.arraycopy(w.accI, 0, outI, 0, len);
     }
+
+    private int flush(int pending, int state, Work w) {
+        if (pending < 0) {
+            return state;
+        }
+        double[][] vh = factor[pending].eigenvectorsDagger();
+        return timesRight(vh[0], vh[1], state, w);
+    }
+
+    /** acc ← acc·(br, bi): a copy if acc = I, a cheap sparse product if acc is diagonal, else a full product. */
+    private int timesRight(double[] br, double[] bi, int state, Work w) {
+        int len = n * n;
+        if (state == 0) {
+            System.arraycopy(br, 0, w.accR, 0, len);
+            System.arraycopy(bi, 0, w.accI, 0, len);
+            return 2;
+        }
+        if (state == 1) {
+            Dense.mul(n, w.accR, w.accI, br, bi, w.tmpR, w.tmpI);
+        } else {
+            Small.mulLarge(n, w.accR, w.accI, br, bi, w.tmpR, w.tmpI);
+        }
+        double[] s = w.accR;
+        w.accR = w.tmpR;
+        w.tmpR = s;
+        s = w.accI;
+        w.accI = w.tmpI;
+        w.tmpI = s;
+        return 2;
+    }
+
+    private void scaleColumns(double[] ar, double[] ai, double[] dr, double[] di) {
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                double xr = ar[i * n + j], xi = ai[i * n + j];
+                ar[i * n + j] = xr * dr[j] - xi * di[j];
+                ai[i * n + j] = xr * di[j] + xi * dr[j];
+            }
+        }
+    }
+
 }

@@ -149,6 +149,7 @@ public final class Driver {
             }
         };
         final double[][] base = {baseR, baseI};
+        final boolean[] baseIsIdentity = {true};
         StepHandler handler = new StepHandler() {
             @Override
             public void init(double tt, double[] yy, double tEnd) {
@@ -164,7 +165,7 @@ public final class Driver {
                     res.sampleY.add(ys);
                     double[] ur = new double[len], ui = new double[len];
                     model.reconstruct(ys, pR, pI);
-                    Dense.mul(n, pR, pI, base[0], base[1], ur, ui);
+                    times(n, pR, pI, base, baseIsIdentity[0], ur, ui);
                     res.sampleU.add(new double[][]{ur, ui});
                     nextSample[0]++;
                 }
@@ -224,7 +225,8 @@ public final class Driver {
             }
             if (restart) {
                 model.reconstruct(lastY, pR, pI);
-                Dense.mul(n, pR, pI, base[0], base[1], wR, wI);
+                times(n, pR, pI, base, baseIsIdentity[0], wR, wI);
+                baseIsIdentity[0] = false;
                 double[] s = base[0];
                 base[0] = wR;
                 wR = s;
@@ -250,11 +252,22 @@ public final class Driver {
         if (res.failure == null) {
             model.reconstruct(y, pR, pI);
             double[] ur = new double[len], ui = new double[len];
-            Dense.mul(n, pR, pI, base[0], base[1], ur, ui);
+            times(n, pR, pI, base, baseIsIdentity[0], ur, ui);
             res.uRe = ur;
             res.uIm = ui;
             res.sampleY.add(y.clone());
         }
         return res;
+    }
+
+    /** out = p·base, skipping the product while the base is still the identity. */
+    private static void times(int n, double[] pR, double[] pI, double[][] base, boolean identity, double[] outR,
+                              double[] outI) {
+        if (identity) {
+            System.arraycopy(pR, 0, outR, 0, n * n);
+            System.arraycopy(pI, 0, outI, 0, n * n);
+        } else {
+            Small.mulLarge(n, pR, pI, base[0], base[1], outR, outI);
+        }
     }
 }

@@ -61,6 +61,7 @@ public final class ExpForm {
     private final double[] aRe, aIm;
     private final double normA;
     private final List<Term> terms;
+    private final Term[] termArray;
 
     /** Analyses A (planar n×n; copied). */
     public ExpForm(int n, double[] re, double[] im) {
@@ -71,6 +72,7 @@ public final class ExpForm {
         List<Term> t = new ArrayList<>();
         this.kind = analyse(t);
         this.terms = Collections.unmodifiableList(t);
+        this.termArray = t.toArray(new Term[0]);
     }
 
     /** @return the evaluation kind */
@@ -344,8 +346,8 @@ public final class ExpForm {
             case SPECTRAL: {
                 java.util.Arrays.fill(outR, 0, len, 0.0);
                 java.util.Arrays.fill(outI, 0, len, 0.0);
-                for (Term t : terms) {
-                    // c = z^power e^{zλ}
+                for (Term t : termArray) {
+                    // c = z^power e^{zλ}; an array, not the list, so that no iterator is allocated
                     double cr, ci;
                     if (t.power == 0) {
                         double xr = zr * t.lamRe - zi * t.lamIm, xi = zr * t.lamIm + zi * t.lamRe;

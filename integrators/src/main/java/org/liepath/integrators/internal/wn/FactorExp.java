@@ -14,7 +14,7 @@ import java.util.Arrays;
  * <p>Immutable; evaluation takes caller-owned scratch. Not part of the public API.
  */
 public final class FactorExp {
-    enum Kind { ZERO, DIAGONAL, BAND, TRIANGULAR, GENERAL }
+    enum Kind { ZERO, DIAGONAL, BAND, TRIANGULAR, NORMAL, GENERAL }
 
     private final int n;
     private final Kind kind;
@@ -24,6 +24,8 @@ public final class FactorExp {
     private final double[] powerNorms; // TRIANGULAR: ‖X^q‖₁/q!
     private final double norm1;
     private final boolean antiHermitian, hermitian;
+    // NORMAL: X = V diag(μ) V† with μ = λ (Hermitian X) or −iλ (anti-Hermitian X = −iA, A = V diag(λ) V†)
+    private final double[] lam, vr, vi, vhr, vhi;
 
     /** Analyses X (planar N×N, copied). */
     public FactorExp(int n, double[] re, double[] im) {
@@ -95,8 +97,35 @@ public final class FactorExp {
             }
             // X^p = 0 for p = n at the latest (strictly triangular)
             pn = Arrays.copyOf(tmp, p);
+        } else if (hermitian || antiHermitian) {
+            kind = Kind.NORMAL;
         } else {
             kind = Kind.GENERAL;
+        }
+        if (kind == Kind.NORMAL) {
+            // diagonalise once (Householder + implicit QL): each exp(zX) is then V·diag·V†, no Padé
+            double[] ar = xr.clone(), ai = xi.clone();
+            if (!hermitian) {
+                // A = iX is Hermitian
+                for (int e = 0; e < n * n; e++) {
+                    ar[e] = -xi[e];
+                    ai[e] = xr[e];
+                }
+            }
+            lam = new double[n];
+            vr = new double[n * n];
+            vi = new double[n * n];
+            new org.liepath.core.internal.HermitianEigen(n).compute(ar, ai, lam, vr, vi);
+            vhr = new double[n * n];
+            vhi = new double[n * n];
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < n; j++) {
+                    vhr[j * n + i] = vr[i * n + j];
+                    vhi[j * n + i] = -vi[i * n + j];
+                }
+            }
+        } else {
+            lam = vr = vi = vhr = vhi = null;
         }
         this.offset = off;
         this.index = p;
@@ -113,6 +142,37 @@ public final class FactorExp {
         return kind != Kind.GENERAL;
     }
 
+    /** @return true if X was diagonalised once: exp(zX) = V diag(e^{zμ}) V† */
+    public boolean isNormal() {
+        return kind == Kind.NORMAL;
+    }
+
+    /** NORMAL kind: the eigenvector matrix V (planar; not to be modified). */
+    double[][] eigenvectors() {
+        return new double[][]{vr, vi};
+    }
+
+    /** NORMAL kind: V† (planar; not to be modified). */
+    double[][] eigenvectorsDagger() {
+        return new double[][]{vhr, vhi};
+    }
+
+    /** NORMAL kind: d_k = e^{zμ_k} into (dr, di), length N. */
+    void spectralFactors(double zr, double zi, double[] dr, double[] di) {
+        for (int k = 0; k < n; k++) {
+            double ar = hermitian ? zr * lam[k] : zi * lam[k];
+            double ai = hermitian ? zi * lam[k] : -zr * lam[k];
+            double e = Math.exp(ar);
+            dr[k] = e * Math.cos(ai);
+            di[k] = e * Math.sin(ai);
+        }
+    }
+
+    /** @return true if X is diagonal (exp(zX) acts by scaling columns) */
+    public boolean isDiagonal() {
+        return kind == Kind.DIAGONAL;
+    }
+
     /** @return a short description of the closed form used */
     public String describe() {
         switch (kind) {
@@ -124,6 +184,8 @@ public final class FactorExp {
                 return "band at offset " + offset + " (finite polynomial)";
             case TRIANGULAR:
                 return "nilpotent of index " + index + " (finite polynomial)";
+            case NORMAL:
+                return "unitary diagonalisation V diag(e^{z mu}) V^H";
             default:
                 return "Padé scaling and squaring";
         }
@@ -169,6 +231,14 @@ public final class FactorExp {
                     pw *= az;
                 }
                 return s;
+            }
+            case NORMAL: {
+                // exact spectral norm max_k |e^{z μ_k}|
+                double best = 0;
+                for (int k = 0; k < n; k++) {
+                    best = Math.max(best, Math.exp(hermitian ? zr * lam[k] : zi * lam[k]));
+                }
+                return best;
             }
             default:
                 if (antiHermitian) {
@@ -239,6 +309,20 @@ public final class FactorExp {
                         outR[d * n + d] += 1;
                     }
                 }
+                return;
+            case NORMAL:
+                // sr = V diag(e^{z μ}), out = sr V†
+                for (int k = 0; k < n; k++) {
+                    double ar = hermitian ? zr * lam[k] : zi * lam[k];
+                    double ai = hermitian ? zi * lam[k] : -zr * lam[k];
+                    double e = Math.exp(ar), cr = e * Math.cos(ai), ci = e * Math.sin(ai);
+                    for (int i = 0; i < n; i++) {
+                        double a = vr[i * n + k], b = vi[i * n + k];
+                        sr[i * n + k] = a * cr - b * ci;
+                        si[i * n + k] = a * ci + b * cr;
+                    }
+                }
+                Small.mulLarge(n, sr, si, vhr, vhi, outR, outI);
                 return;
             default:
                 for (int e = 0; e < len; e++) {
