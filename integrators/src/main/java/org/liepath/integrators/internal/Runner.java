@@ -6,7 +6,7 @@ import java.util.Arrays;
 
 /**
  * Drives a {@link Kernel} over an interval: fixed steps on the grid t_k = t0 + k·dt, dt = (t1 − t0)/n (each grid
- * step split at coefficient breakpoints and sample times), or adaptive steps with an embedded or step-doubling error
+ * step split at coefficient breakpoints and sample times), or adaptive steps with the kernel's (step-doubling) error
  * estimate and the standard controller h_new = h·min(5, max(0.2, 0.9 (tol/err)^{1/(q+1)})) (E. Hairer, S.P. Nørsett,
  * G. Wanner, Solving Ordinary Differential Equations I, 2nd ed., Springer 1993, §II.4), landing exactly on every
  * breakpoint and sample time.
