@@ -129,10 +129,10 @@ public final class Evolution {
     }
 
     /**
-     * An estimate of the global error of an adaptive run: the sum of the accepted local error estimates, each
-     * relative to the Frobenius norm of the state (a bound under linear accumulation; conservative for schemes
-     * whose estimate measures a lower-order partner). NaN for fixed-step runs, the reference integrator and
-     * Wei–Norman runs; 0 for exact piecewise stepping.
+     * An estimate of the global error of an adaptive run: the sum of the accepted local error estimates (step
+     * doubling), each relative to the Frobenius norm of the state — a bound under linear accumulation of local
+     * errors; since the run propagates the two half steps, the true error is usually smaller. NaN for fixed-step
+     * runs, the reference integrator and Wei–Norman runs; 0 for exact piecewise stepping.
      */
     public double errorEstimate() {
         return errorEstimate;

@@ -44,7 +44,7 @@ import java.util.List;
  *
  * <p><b>Modes</b>: propagator (default for a Hamiltonian), state vector ({@link #state}), dynamical map (default for
  * a Lindbladian, {@link Evolution#channel()}) and density ({@link #density}). Dense exponentials in the propagator
- * and channel modes (sizes up to a few hundred); vector states (ψ, or vec(ρ)) of dimension ≥ 48 get each
+ * and channel modes (sizes up to a few hundred); vector states (ψ, or vec(ρ)) of dimension ≥ 64 get each
  * exponential as a Krylov action (Lanczos or Arnoldi, accuracy 1e-14 per exponential), falling back to the dense
  * exponential if Krylov cannot converge.
  *
@@ -210,9 +210,10 @@ public final class Evolve {
     }
 
     /**
-     * A progress listener called after every accepted step with the fraction of the interval done and the number of
-     * accepted steps; returning false cancels the run (status CANCELLED, the partial state in the trajectory). A
-     * listener that throws is not called again and the run goes on; the failure is recorded in
+     * A progress listener called after every accepted step (for fixed steps: after every grid step) with the
+     * fraction of the interval done (1 at the last call) and the number of steps so far; returning false cancels the
+     * run (status CANCELLED, the partial state in the trajectory), except at the last call, where nothing is left to
+     * cancel. A listener that throws is not called again and the run goes on; the failure is recorded in
      * {@link Stats#monitorFailure()} and the status message.
      */
     public Evolve monitor(ProgressListener listener) {

@@ -69,8 +69,8 @@ class EvolveRunTest {
 
     /**
      * A generator that commutes with itself, H = cos(t) X: U(t) = exp(−i sin(t) X) = cos(sin t) I − i sin(sin t) X.
-     * Embedded partners on shared nodes are blind to the quadrature error here; the adaptive run must still meet
-     * its tolerance (global error ≲ steps × tol).
+     * An embedded partner on the same nodes would be blind to the quadrature error here (they share the quadrature
+     * of ∫A); the adaptive run must still meet its tolerance (global error ≲ steps × tol).
      */
     @ParameterizedTest(name = "{0}")
     @MethodSource("schemes")
@@ -135,6 +135,25 @@ class EvolveRunTest {
         assertEquals(0.3, ev.status().time(), 1e-15);
     }
 
+    /** The listener hears about every accepted step, the last one with fraction 1; a late "stop" is moot. */
+    @Test
+    void listenerSeesEveryStepUpToTheEnd() {
+        Evolve fixed = Evolve.of(Fixtures.drivenFour(6)).over(0, 2).steps(17);
+        for (Evolve e : new Evolve[]{Evolve.of(Fixtures.drivenFour(6)).over(0, 2), fixed,
+            Evolve.of(Fixtures.drivenFour(6)).over(0, 2).scheme(Scheme.reference())}) {
+            List<Double> fractions = new ArrayList<>();
+            Evolution ev = e.monitor((f, c) -> {
+                fractions.add(f);
+                return f < 1.0;
+            }).run();
+            assertTrue(ev.status().isSuccess(), ev.status().toString());
+            // fixed runs report once per grid step (a grid step split at a breakpoint counts once)
+            long expected = e == fixed ? 17 : ev.stats().acceptedSteps();
+            assertEquals(expected, fractions.size());
+            assertEquals(1.0, fractions.get(fractions.size() - 1), 1e-12);
+        }
+    }
+
     @Test
     void throwingListenerDoesNotCorruptTheResult() {
         AtomicInteger calls = new AtomicInteger();
@@ -175,6 +194,19 @@ class EvolveRunTest {
         assertThrows(IllegalStateException.class, ev::propagator);
     }
 
+    /** A tolerance far below rounding cannot be met: the step size underflows and the run says so. */
+    @Test
+    void impossibleToleranceEndsWithStepUnderflow() {
+        for (Scheme s : List.of(Scheme.commutatorFree4Opt(), Scheme.magnus4(), Scheme.magnus6())) {
+            Evolution ev = Evolve.of(Fixtures.drivenQubit()).over(0, 1).scheme(s).tolerance(1e-300).run();
+            assertEquals(Status.Kind.STEP_UNDERFLOW, ev.status().kind(), s.name());
+            assertTrue(ev.status().message().contains("fell below"), ev.status().message());
+        }
+        Evolution ref = Evolve.of(Fixtures.drivenQubit()).over(0, 1).scheme(Scheme.reference()).tolerance(1e-300)
+                .run();
+        assertTrue(!ref.status().isSuccess(), ref.status().toString());
+    }
+
     @Test
     void samplesAreHitExactlyAndAgreeWithSeparateRuns() {
         Hamiltonian h = Fixtures.drivenFour(8);
@@ -211,7 +243,7 @@ class EvolveRunTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("schemes")
     void largeStatesUseKrylovAndAgreeWithTheDensePropagator(Scheme s) {
-        int n = 48; // the smallest dimension that takes the Krylov route
+        int n = 64; // the smallest dimension that takes the Krylov route
         java.util.Random r = new java.util.Random(77);
         Hamiltonian h = Hamiltonian.builder(n).term(0.1, Operator.real(Fixtures.randomSymmetric(r, n)))
                 .term(Operator.real(Fixtures.randomSymmetric(r, n)), Drive.cosine(0.05, 2.0)).build();

