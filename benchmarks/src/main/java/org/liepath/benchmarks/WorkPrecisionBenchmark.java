@@ -49,8 +49,8 @@ public class WorkPrecisionBenchmark {
                 "commutatorFree4", 368, "commutatorFree4Opt", 160, "commutatorFree6", 56);
         tune("SIXTEEN_LEVEL", 5e-13, "magnus4", 720, "magnus6", 196, "magnus8", 104,
                 "commutatorFree4", 520, "commutatorFree4Opt", 176, "commutatorFree6", 88);
-        tune("SIXTY_FOUR_LEVEL", 1e-11, "magnus4", 400, "magnus6", 100, "magnus8", 50,
-                "commutatorFree4", 400, "commutatorFree4Opt", 200, "commutatorFree6", 100);
+        tune("SIXTY_FOUR_LEVEL", 2.2e-11, "magnus4", 248, "magnus6", 54, "magnus8", 27,
+                "commutatorFree4", 176, "commutatorFree4Opt", 68, "commutatorFree6", 26);
     }
 
     static void tune(String problem, double commonsTol, Object... schemeSteps) {
