@@ -169,6 +169,25 @@ public final class LieAlgebra {
     }
 
     /**
+     * The span of pairwise orthogonal elements already known to be closed (used by {@link Subalgebras}, whose landing
+     * table proves closure): elements are normalised, not orthogonalised, and nothing is checked. Hermitian elements
+     * are read as −i b unless {@code complex}.
+     */
+    static LieAlgebra ofClosedOrthogonal(List<Operator> orthogonal, boolean complex) {
+        int n = orthogonal.get(0).dim();
+        boolean minusI = !complex && hermitianKind(orthogonal, "basis");
+        Basis b = new Basis(n);
+        for (Operator a : orthogonal) {
+            double[] v = MatVec.of(a, minusI, 1 / a.norm());
+            b.addOrthonormal(v);
+            if (complex) {
+                b.addOrthonormal(timesI(n, v));
+            }
+        }
+        return new LieAlgebra(n, complex, DEFAULT_TOLERANCE, b, null);
+    }
+
+    /**
      * Configuration of a Lie closure: tolerance, dimension limit and progress listener. Immutable; each setter returns
      * a copy. Example: {@code LieAlgebra.closure().tolerance(1e-10).maxDimension(4096).monitor(l).of(ops)}.
      */
@@ -592,33 +611,34 @@ public final class LieAlgebra {
     public StructureConstants structureConstants() {
         RealStructure s = rs();
         int m = dimension();
+        // collect (pair, k) → (re, im); for a complex algebra the constants of e_i = E_2i sit at realified
+        // entries (2i, 2j, 2k) (real part) and (2i, 2j, 2k+1) (imaginary part)
+        java.util.TreeMap<Long, double[]> entries = new java.util.TreeMap<>();
+        s.forEach((i, j, k, c) -> {
+            int f = complex ? 2 : 1;
+            if (i % f != 0 || j % f != 0) {
+                return;
+            }
+            int a = i / f, b = j / f;
+            long key = ((long) (a * m - a * (a + 1) / 2 + (b - a - 1))) * m + k / f;
+            entries.computeIfAbsent(key, x -> new double[2])[k % f] = c;
+        });
         int pairs = m * (m - 1) / 2;
         int[] start = new int[pairs + 1];
-        List<Integer> ks = new ArrayList<>();
-        List<double[]> vs = new ArrayList<>();
-        int p = 0;
-        for (int i = 0; i < m; i++) {
-            for (int j = i + 1; j < m; j++) {
-                start[p++] = ks.size();
-                for (int k = 0; k < m; k++) {
-                    double re = complex ? s.get(2 * i, 2 * j, 2 * k) : s.get(i, j, k);
-                    double im = complex ? s.get(2 * i, 2 * j, 2 * k + 1) : 0;
-                    if (re != 0 || im != 0) {
-                        ks.add(k);
-                        vs.add(new double[] {re, im});
-                    }
-                }
-            }
+        int[] ks = new int[entries.size()];
+        double[] re = new double[ks.length], im = new double[ks.length];
+        int e = 0;
+        for (java.util.Map.Entry<Long, double[]> en : entries.entrySet()) {
+            int p = (int) (en.getKey() / m);
+            ks[e] = (int) (en.getKey() % m);
+            re[e] = en.getValue()[0];
+            im[e] = en.getValue()[1];
+            start[p + 1] = ++e;
         }
-        start[p] = ks.size();
-        int[] k = new int[ks.size()];
-        double[] re = new double[ks.size()], im = new double[ks.size()];
-        for (int e = 0; e < k.length; e++) {
-            k[e] = ks.get(e);
-            re[e] = vs.get(e)[0];
-            im[e] = vs.get(e)[1];
+        for (int p = 1; p <= pairs; p++) {
+            start[p] = Math.max(start[p], start[p - 1]);
         }
-        return new StructureConstants(m, complex, start, k, re, im);
+        return new StructureConstants(m, complex, start, ks, re, im);
     }
 
     private void requireReal(String what, String instead) {

@@ -282,6 +282,23 @@ class ClassicalAlgebrasTest {
     }
 
     @Test
+    void degenerateAlgebras() {
+        LieAlgebra zero = LieAlgebra.generatedBy(List.of(Operator.zero(2)));
+        assertEquals(0, zero.dimension());
+        assertEquals("0", zero.type());
+        assertEquals(0, zero.rank());
+        LieAlgebra u1 = LieAlgebra.generatedBy(List.of(Operator.identity(3)));
+        assertEquals("u(1)", u1.type());
+        assertEquals(1, u1.center().dimension());
+        assertTrue(u1.isAbelian() && u1.isSolvable() && u1.isNilpotent());
+        assertFalse(u1.isSemisimple());
+        // u(2) = su(2) ⊕ u(1) is full unitary
+        LieAlgebra u2 = LieAlgebra.generatedBy(List.of(Pauli.x(), Pauli.y(), Pauli.i()));
+        assertEquals("su(2) ⊕ u(1)", u2.type());
+        assertTrue(u2.isFullUnitary());
+    }
+
+    @Test
     void commutationTableAndPrintedForms() {
         List<Operator> zs = List.of(Pauli.string("ZI"), Pauli.string("IZ"), Pauli.string("ZZ"));
         LieAlgebra torus = LieAlgebra.spannedBy(zs);

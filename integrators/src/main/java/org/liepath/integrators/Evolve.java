@@ -43,8 +43,10 @@ import java.util.List;
  * {@link Stepper#advance} calls on the same grid.
  *
  * <p><b>Modes</b>: propagator (default for a Hamiltonian), state vector ({@link #state}), dynamical map (default for
- * a Lindbladian, {@link Evolution#channel()}) and density ({@link #density}). Dense exponentials throughout (sizes up
- * to a few hundred in the propagator mode); a Krylov action for large state vectors is not wired in yet.
+ * a Lindbladian, {@link Evolution#channel()}) and density ({@link #density}). Dense exponentials in the propagator
+ * and channel modes (sizes up to a few hundred); vector states (ψ, or vec(ρ)) of dimension ≥ 48 get each
+ * exponential as a Krylov action (Lanczos or Arnoldi, accuracy 1e-14 per exponential), falling back to the dense
+ * exponential if Krylov cannot converge.
  *
  * <p>Bad input throws {@link InvalidInputException} at the call that supplies it, or at {@link #run()} for
  * combinations (no interval, a scheme that cannot serve the problem, sample times outside the interval). Numerical

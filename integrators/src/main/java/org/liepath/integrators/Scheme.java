@@ -25,14 +25,18 @@ import java.util.Objects;
  *
  * <p>Error estimates for adaptive runs (measured relative to the Frobenius norm of the state):
  * <ul>
- *   <li>{@link #magnus6()}: embedded fourth-order exponent on the same three nodes (no extra evaluation, no extra
- *   exponential);</li>
+ *   <li>{@link #magnus6()}: embedded fourth-order exponent on the same three nodes (no extra exponential);</li>
  *   <li>{@link #commutatorFree4Opt()} and {@link #commutatorFree6()}: embedded CF4:2 evaluated on the same three Gauss
- *   nodes (two extra exponentials, no extra evaluation); the estimate is of CF4:2's error, so it is conservative;</li>
+ *   nodes (two extra exponentials); the estimate is of CF4:2's error, so it is conservative;</li>
+ *   <li>for these three, a partner on the same nodes shares the three-point quadrature of ∫A and is blind to the
+ *   quadrature error (it vanishes for a generator that commutes with itself, e.g. a single driven term), so the
+ *   estimate adds ‖h(G₃ − G₂)X‖/‖X‖, the difference of the three- and two-point Gauss rules for ∫A (two extra
+ *   evaluations per step, one product);</li>
  *   <li>{@link #exponentialMidpoint()}, {@link #magnus4()}, {@link #magnus8()}, {@link #commutatorFree4()}: step
  *   doubling (three steps' work per step), because they have no partner on their nodes;</li>
  *   <li>{@link #piecewiseExact()}: none needed (exact per segment).</li>
  * </ul>
+ * The controller exponent is 1/(q+1) with q the order of what the estimate measures (4 for the embedded pairs).
  * The propagated result is always the higher-order one (local extrapolation), so every exponential factor stays in
  * the group (unitary for a Hamiltonian).
  *
@@ -165,7 +169,7 @@ public final class Scheme {
         return order;
     }
 
-    /** @return evaluations of the generator (Hamiltonian) per fixed step */
+    /** @return evaluations of the generator (Hamiltonian) per fixed step (adaptive steps add their estimate's) */
     public int nodes() {
         return nodes;
     }

@@ -11,8 +11,9 @@ import java.util.List;
  * orthonormal to working precision (L. Giraud, J. Langou, M. Rozložník, "The loss of orthogonality in the
  * Gram–Schmidt orthogonalization process", Comput. Math. Appl. 50, 1069 (2005); the "twice is enough" rule goes back
  * to W. Kahan, see B. N. Parlett, The Symmetric Eigenvalue Problem, 1980, §6.9). CGS2 computes all projection
- * coefficients of a pass from the same vector, so a sparse candidate (a bracket of Pauli strings) costs O(nnz) per
- * basis element instead of O(n²).
+ * coefficients of a pass from the same vector, so a sparse candidate (a bracket of Pauli strings) is projected
+ * through an inverted index (matrix position → sparse basis elements touching it) in O(nnz · elements per position)
+ * instead of O(m·n²).
  *
  * <p>A candidate whose residual after the first pass is already at or below the acceptance threshold is refused
  * without the second pass: the second pass only removes components inside the span, so it cannot raise the residual

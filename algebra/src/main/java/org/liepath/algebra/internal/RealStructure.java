@@ -12,12 +12,26 @@ public final class RealStructure {
     private final int[] start; // per pair p(i,j), i<j: entries start[p] .. start[p+1]-1
     private final int[] ks;
     private final double[] vals;
+    /** per entry: its pair (i, j), so that visits skip empty pairs */
+    private final int[] is;
+    private final int[] js;
 
     private RealStructure(int m, int[] start, int[] ks, double[] vals) {
         this.m = m;
         this.start = start;
         this.ks = ks;
         this.vals = vals;
+        this.is = new int[ks.length];
+        this.js = new int[ks.length];
+        int p = 0;
+        for (int i = 0; i < m; i++) {
+            for (int j = i + 1; j < m; j++, p++) {
+                for (int e = start[p]; e < start[p + 1]; e++) {
+                    is[e] = i;
+                    js[e] = j;
+                }
+            }
+        }
     }
 
     /**
@@ -153,21 +167,18 @@ public final class RealStructure {
     }
 
     public void forEach(Visitor v) {
-        int p = 0;
-        for (int i = 0; i < m; i++) {
-            for (int j = i + 1; j < m; j++) {
-                for (int e = start[p]; e < start[p + 1]; e++) {
-                    v.entry(i, j, ks[e], vals[e]);
-                }
-                p++;
-            }
+        for (int e = 0; e < ks.length; e++) {
+            v.entry(is[e], js[e], ks[e], vals[e]);
         }
     }
 
     /** @return the coordinates of [x, y] for coordinate vectors x, y */
     public double[] bracket(double[] x, double[] y) {
         double[] out = new double[m];
-        forEach((i, j, k, c) -> out[k] += c * (x[i] * y[j] - x[j] * y[i]));
+        for (int e = 0; e < ks.length; e++) {
+            int i = is[e], j = js[e];
+            out[ks[e]] += vals[e] * (x[i] * y[j] - x[j] * y[i]);
+        }
         return out;
     }
 

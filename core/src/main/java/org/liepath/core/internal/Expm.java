@@ -6,7 +6,10 @@ package org.liepath.core.internal;
  * <p>Method: N.J. Higham, "The scaling and squaring method for the matrix exponential revisited", SIAM J. Matrix
  * Anal. Appl. 26(4) (2005) 1179–1193: degree m ∈ {3, 5, 7, 9} is used when ‖A‖₁ ≤ θ_m, otherwise A is scaled by 2^-s
  * so that ‖2^-s A‖₁ ≤ θ_13, r_13 is evaluated with six products and one LU solve, and the result squared s times.
- * θ_m and the Padé coefficients b_j = (2m−j)!/((m−j)! j!) are the published double-precision values.
+ * θ_m and the Padé coefficients b_j = (2m−j)!/((m−j)! j!) are the published double-precision values. The powers
+ * A², A⁴ formed for the degree tests are reused (rescaled by 2^{-2s}, 2^{-4s}) after scaling, as in the paper.
+ * Orders 1 and 2 use closed forms ({@link #exp2}), which are exact to rounding also for defective and nearly
+ * degenerate 2×2 matrices.
  *
  * <p>A workspace object holds every scratch array, so repeated calls at one dimension allocate nothing. Instances are
  * not thread-safe; use one per thread. Not part of the public API.
@@ -252,10 +255,22 @@ public final class Expm {
         // δ² = h² + b·g
         double sqr = hr * hr - hi * hi + br * gr - bi * gi;
         double sqi = 2 * hr * hi + br * gi + bi * gr;
-        // principal square root of δ²
-        double mod = Math.sqrt(HermitianEigen.hyp(sqr, sqi));
-        double ang = 0.5 * Math.atan2(sqi, sqr);
-        double delr = mod * Math.cos(ang), deli = mod * Math.sin(ang);
+        // principal square root of δ², in the cancellation-free form (no trigonometry, so that a real δ² < 0,
+        // the Hermitian case, gives an exactly imaginary δ and exactly unimodular e^{μ±δ})
+        double abs2 = HermitianEigen.hyp(sqr, sqi);
+        double mod = Math.sqrt(abs2);
+        double delr, deli;
+        if (abs2 == 0) {
+            delr = 0;
+            deli = 0;
+        } else if (sqr >= 0) {
+            delr = Math.sqrt(0.5 * (abs2 + sqr));
+            deli = sqi / (2 * delr);
+        } else {
+            double q = Math.sqrt(0.5 * (abs2 - sqr));
+            delr = Math.abs(sqi) / (2 * q);
+            deli = Math.copySign(q, sqi);
+        }
         double chr, chi, shr, shi; // e^μ cosh δ and e^μ sinh δ / δ
         if (mod < 0.5) {
             // sinh δ / δ = Σ δ^{2k} / (2k+1)!  (|δ²| < 1/4: 9 terms leave < 1e-23); cosh δ = Σ δ^{2k} / (2k)!

@@ -17,9 +17,9 @@ package org.liepath.core.internal;
  * Eigenvalues are returned in ascending order; V is unitary to a few ulps times n. Cost about 9n³ real flops for the
  * reduction and back-transformation plus about 6n³ for the QL rotations (two QL sweeps per eigenvalue on average).
  *
- * <p>The input is scaled by the largest entry modulus before the reduction, so no intermediate can overflow or
- * underflow for any finite input. Only the lower triangle is not assumed: the full matrix is used, so a matrix
- * that is Hermitian only to rounding gives the decomposition of its Hermitian part to first order.
+ * <p>The input is scaled by its largest entry before the reduction, so no intermediate overflows or underflows
+ * destructively for any finite input. Both triangles are read (the full trailing block is updated), so a matrix that
+ * is Hermitian only to rounding gives the decomposition of its Hermitian part to first order.
  *
  * <p>A workspace instance holds all scratch arrays: {@link #compute} allocates nothing. Not thread-safe (one
  * instance per thread). Not part of the public API.

@@ -4,9 +4,10 @@ package org.liepath.integrators.internal;
  * Commutator-free exponential step X ← exp(Ω_s) ··· exp(Ω_1) X with Ω_j = h Σ_k α_jk A(t + c_k h) (Ω_1 acts first).
  * The exponential midpoint rule is the one-row case.
  *
- * <p>With an embedded table on the same nodes, a trial step propagates with the main table and estimates the error
- * by the difference to the partner (no extra coefficient evaluations, one exponential per partner row); without one
- * it uses step doubling.
+ * <p>With an embedded table on the same (three Gauss) nodes, a trial step propagates with the main table and estimates
+ * the error by the difference to the partner (one exponential per partner row) plus the quadrature check of
+ * {@link Kernel#quadratureCheck} (two extra evaluations), since both tables share the same quadrature of ∫A; without
+ * a partner it uses step doubling.
  */
 public final class CommutatorFreeKernel extends Kernel {
     private final double[] nodes;
@@ -63,6 +64,7 @@ public final class CommutatorFreeKernel extends Kernel {
         System.arraycopy(xi, 0, zi, 0, len);
         apply(table, h, p, yr, yi);
         apply(partner, h, p, zr, zi);
-        return diff(len, yr, yi, zr, zi) / norm(len, yr, yi);
+        double ordering = diff(len, yr, yi, zr, zi) / norm(len, yr, yi);
+        return ordering + quadratureCheck(t, h, p, yr, yi);
     }
 }

@@ -59,7 +59,8 @@ public final class MagnusKernel extends Kernel {
         expApply(wr, wi, p, yr, yi);
         // δ = Ω^[6] − Ω^[4] is left in scratch pair 4 by exponent(h)
         mulLeft(p, m6[8], m6[9], yr, yi, zr, zi);
-        return norm(len, zr, zi) / norm(len, yr, yi);
+        double ordering = norm(len, zr, zi) / norm(len, yr, yi);
+        return ordering + quadratureCheck(t, h, p, yr, yi);
     }
 
     /** Writes Ω to (wr, wi) from the coefficients in coef. */

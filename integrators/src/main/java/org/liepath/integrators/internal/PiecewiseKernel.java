@@ -6,7 +6,8 @@ import org.liepath.core.internal.Dense;
  * Exact stepping for a generator that is constant on the step: X ← exp(h A(t + h/2)) X. Exact (to the rounding of
  * the exponential) whenever no breakpoint lies inside the step; the caller guarantees that.
  *
- * <p>Long steps are cut into k equal pieces with ‖(h/k)A‖₁ ≤ {@value #MAX_NORM} and the one exponential applied k
+ * <p>For a Hamiltonian the exponential is unitary to rounding for any step (eigen route). For a GKLS generator
+ * (Padé) long steps are cut into k equal pieces with ‖(h/k)A‖₁ ≤ {@value #MAX_NORM} and the one exponential applied k
  * times: each squaring in scaling and squaring roughly doubles the departure from unitarity, so capping the scaling
  * at four squarings (θ_13 · 2⁴ ≈ 86, N.J. Higham, SIAM J. Matrix Anal. Appl. 26 (2005) 1179–1193) keeps long
  * constant segments unitary to rounding.
@@ -28,13 +29,12 @@ public final class PiecewiseKernel extends Kernel {
         evaluate(t, h, Tables.MIDPOINT);
         combineNodes(h, Tables.MIDPOINT_TABLE[0], wr, wi);
         double norm = Dense.norm1(m, wr, wi);
-        long pieces = Double.isFinite(norm) && norm > MAX_NORM ? (long) Math.ceil(norm / MAX_NORM) : 1;
+        long pieces = !unitaryExponentials() && Double.isFinite(norm) && norm > MAX_NORM ? (long) Math.ceil(norm / MAX_NORM) : 1;
         if (pieces == 1) {
             expApply(wr, wi, p, xr, xi);
             return;
         }
-        expm.compute(1.0 / pieces, wr, wi, er, ei);
-        exponentials++;
+        exponential(1.0 / pieces, wr, wi, er, ei);
         int len = m * p;
         for (long k = 0; k < pieces; k++) {
             mulLeft(p, er, ei, xr, xi, sr, si);
