@@ -44,7 +44,7 @@ import java.util.List;
  *
  * <p><b>Modes</b>: propagator (default for a Hamiltonian), state vector ({@link #state}), dynamical map (default for
  * a Lindbladian, {@link Evolution#channel()}) and density ({@link #density}). Dense exponentials in the propagator
- * and channel modes (sizes up to a few hundred); vector states (ψ, or vec(ρ)) of dimension ≥ 48 get each
+ * and channel modes (sizes up to a few hundred); vector states (ψ, or vec(ρ)) of dimension ≥ 64 get each
  * exponential as a Krylov action (Lanczos or Arnoldi, accuracy 1e-14 per exponential), falling back to the dense
  * exponential if Krylov cannot converge.
  *

@@ -175,6 +175,19 @@ class EvolveRunTest {
         assertThrows(IllegalStateException.class, ev::propagator);
     }
 
+    /** A tolerance far below rounding cannot be met: the step size underflows and the run says so. */
+    @Test
+    void impossibleToleranceEndsWithStepUnderflow() {
+        for (Scheme s : List.of(Scheme.commutatorFree4Opt(), Scheme.magnus4(), Scheme.magnus6())) {
+            Evolution ev = Evolve.of(Fixtures.drivenQubit()).over(0, 1).scheme(s).tolerance(1e-300).run();
+            assertEquals(Status.Kind.STEP_UNDERFLOW, ev.status().kind(), s.name());
+            assertTrue(ev.status().message().contains("fell below"), ev.status().message());
+        }
+        Evolution ref = Evolve.of(Fixtures.drivenQubit()).over(0, 1).scheme(Scheme.reference()).tolerance(1e-300)
+                .run();
+        assertTrue(!ref.status().isSuccess(), ref.status().toString());
+    }
+
     @Test
     void samplesAreHitExactlyAndAgreeWithSeparateRuns() {
         Hamiltonian h = Fixtures.drivenFour(8);
@@ -211,7 +224,7 @@ class EvolveRunTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("schemes")
     void largeStatesUseKrylovAndAgreeWithTheDensePropagator(Scheme s) {
-        int n = 48; // the smallest dimension that takes the Krylov route
+        int n = 64; // the smallest dimension that takes the Krylov route
         java.util.Random r = new java.util.Random(77);
         Hamiltonian h = Hamiltonian.builder(n).term(0.1, Operator.real(Fixtures.randomSymmetric(r, n)))
                 .term(Operator.real(Fixtures.randomSymmetric(r, n)), Drive.cosine(0.05, 2.0)).build();

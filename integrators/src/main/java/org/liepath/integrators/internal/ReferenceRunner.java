@@ -30,6 +30,14 @@ public final class ReferenceRunner {
         }
     }
 
+    private static final class NonFiniteTime extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        NonFiniteTime(double t) {
+            super("the reference integrator asked for the generator at t = " + t, null, false, false);
+        }
+    }
+
     /** Runs the reference integrator (spec.adaptive must be true). */
     public static Run.Result run(LinearSystem sys, Run.Spec spec) {
         long start = System.nanoTime();
@@ -48,6 +56,10 @@ public final class ReferenceRunner {
 
             @Override
             public void computeDerivatives(double t, double[] yy, double[] dot) {
+                if (!Double.isFinite(t)) {
+                    // Commons Math's initial step guess degenerates for tolerances far below double precision
+                    throw new NonFiniteTime(t);
+                }
                 sys.coefficients(t, c);
                 evals[0]++;
                 sys.combine(c, 1.0, ar, ai);
@@ -136,6 +148,10 @@ public final class ReferenceRunner {
         } catch (Cancelled e) {
             res.outcome = Run.Outcome.CANCELLED;
             res.message = "cancelled by the progress listener at t = " + res.timeReached;
+        } catch (NonFiniteTime e) {
+            res.outcome = Run.Outcome.NON_FINITE;
+            res.message = e.getMessage() + " after t = " + t + " (tolerance " + tol
+                    + " is below what double precision can deliver?)";
         } catch (DriveException e) {
             res.outcome = Run.Outcome.DRIVE_FAILED;
             res.message = e.getMessage();
