@@ -26,7 +26,7 @@ class LieAlgebraPropertiesTest {
 
     /** Random Hermitian generators of several kinds, so that the closures are not all su(N) or u(N). */
     static List<Operator> randomGenerators(Random r) {
-        int n = 2 + r.nextInt(3);
+        int n = 2 + r.nextInt(4);
         int count = 1 + r.nextInt(3);
         int kind = r.nextInt(3);
         int split = 1 + r.nextInt(n - 1);
