@@ -35,8 +35,9 @@ import java.util.concurrent.TimeUnit;
  * plus one reconstruction with unitary factors) against full-dimension propagation with the default commutator-free
  * scheme (CF4:3Opt) at the same tolerance. The ratio full / Wei–Norman is printed by {@link #main}.
  *
- * <p>Run: {@code java -cp benchmarks/target/benchmarks.jar org.liepath.benchmarks.WeiNormanSpinBenchmark} (prints the
- * ratios), or through JMH's own main with the regex {@code WeiNormanSpin}.
+ * <p>Run: {@code java -cp benchmarks/target/benchmarks.jar org.liepath.benchmarks.WeiNormanSpinBenchmark [quick]}
+ * (prints the ratios; {@code quick} skips j = 100, whose full-dimension run takes about a minute per call), or
+ * through JMH's own main with the regex {@code WeiNormanSpin}.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
@@ -78,16 +79,20 @@ public class WeiNormanSpinBenchmark {
      */
     public static void main(String[] args) throws Exception {
         String name = WeiNormanSpinBenchmark.class.getSimpleName();
-        Options small = new OptionsBuilder().include(name).param("j", "5", "25").forks(1).warmupIterations(2)
-                .measurementIterations(3).warmupTime(TimeValue.seconds(1)).measurementTime(TimeValue.seconds(2))
+        // the Wei–Norman path takes about a millisecond per run: give the JIT enough warm-up calls
+        Options small = new OptionsBuilder().include(name).param("j", "5", "25").forks(1).warmupIterations(5)
+                .measurementIterations(5).warmupTime(TimeValue.seconds(2)).measurementTime(TimeValue.seconds(2))
                 .build();
         Options bigWn = new OptionsBuilder().include(name + ".weiNorman").param("j", "100").forks(1)
-                .mode(Mode.SingleShotTime).warmupIterations(1).measurementIterations(3).build();
+                .mode(Mode.SingleShotTime).warmupIterations(10).measurementIterations(5).build();
         Options bigFull = new OptionsBuilder().include(name + ".fullCommutatorFree").param("j", "100").forks(1)
                 .mode(Mode.SingleShotTime).warmupIterations(0).measurementIterations(1).build();
         List<RunResult> results = new ArrayList<>(new Runner(small).run());
-        results.addAll(new Runner(bigWn).run());
-        results.addAll(new Runner(bigFull).run());
+        boolean quick = args.length > 0 && args[0].equals("quick");
+        if (!quick) {
+            results.addAll(new Runner(bigWn).run());
+            results.addAll(new Runner(bigFull).run());
+        }
         Map<Double, double[]> byJ = new TreeMap<>();
         for (RunResult r : results) {
             double jj = Double.parseDouble(r.getParams().getParam("j"));

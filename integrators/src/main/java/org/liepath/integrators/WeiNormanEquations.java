@@ -270,7 +270,10 @@ public final class WeiNormanEquations {
                 line.append('0');
             }
             sb.append(latex ? "a_{" + (k + 1) + "}(t) = " : "  a" + (k + 1) + "(t) = ").append(line)
-                    .append(latex ? (k == m - 1 ? "\n" : ",\\; ") : "\n");
+                    .append(latex ? (k == m - 1 ? "" : ",\\; ") : "\n");
+        }
+        if (latex) {
+            sb.append("\\quad (c_{k}(t)\\text{: the drive of term } k \\text{ of } H)\n");
         }
         if (!latex) {
             sb.append("nonlinearity: ").append(nonlinearity());
@@ -295,7 +298,7 @@ public final class WeiNormanEquations {
         if (latex) {
             return "c_{" + (j + 1) + "}(t)";
         }
-        return name.matches("[-+]?[0-9.eE+-]+") ? name : "[" + name + "](t)";
+        return name.matches("[-+]?[0-9.eE+-]+") ? name : "(" + name + ")";
     }
 
     @Override

@@ -74,6 +74,16 @@ class WeiNormanApiTest {
     }
 
     @Test
+    void largeChartsPrintWithinABudget() {
+        // so(5) in an anti-Hermitian Pauli basis: the closed form of Γ(g) has thousands of exponential terms; the
+        // printer gives up (classification GENERAL) instead of expanding without bound
+        WeiNorman chart = WeiNorman.of(so5());
+        String text = chart.equations(Hamiltonian.constant(Pauli.string("ZI"))).render();
+        assertTrue(text.contains("too large") || text.contains("implicit"), text);
+        assertEquals(Nonlinearity.GENERAL, chart.nonlinearity());
+    }
+
+    @Test
     void closedFormInverseOfGammaEqualsTheNumericalSolve() {
         // The printed equations are exact: M(g) from the closed form times a equals the LU solve of Γ(g)ġ = a.
         for (List<Operator> basis : List.of(sl3Ladder(), List.of(SP, Pauli.z(), SM),

@@ -19,7 +19,18 @@ public final class Symbolic {
     /** Per-equation classification, ordered by increasing difficulty. */
     public enum Kind { QUADRATURE, LINEAR, RICCATI, POLYNOMIAL, EXPONENTIAL, GENERAL }
 
-    private static final int MAX_TERMS = 4000;
+    private static final int MAX_TERMS = 1000;
+    /** Monomial multiplications allowed for one chart before the closed form is given up (keeps printing fast). */
+    private static final long MAX_WORK = 300_000L;
+
+    /** Thrown when the closed form grows beyond the work budget. */
+    private static final class TooLarge extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        TooLarge() {
+            super(null, null, false, false);
+        }
+    }
 
     /** A monomial Π g_i^{p_i} exp(Σ μ_i g_i). */
     static final class Mono {
@@ -104,7 +115,11 @@ public final class Symbolic {
             c[1] += ci;
         }
 
-        Expr times(Expr o) {
+        Expr times(Expr o, long[] work) {
+            work[0] += (long) t.size() * o.t.size();
+            if (work[0] > MAX_WORK) {
+                throw new TooLarge();
+            }
             Expr r = new Expr();
             for (Map.Entry<Mono, double[]> a : t.entrySet()) {
                 for (Map.Entry<Mono, double[]> b : o.t.entrySet()) {
@@ -161,10 +176,18 @@ public final class Symbolic {
 
     /** @return the symbolic equations of the chart, or null if some ad X_k has no closed form */
     public static Symbolic of(Chart c) {
-        int m = c.m;
         if (!c.allClosedForm()) {
             return null;
         }
+        try {
+            return build(c, new long[1]);
+        } catch (TooLarge e) {
+            return new Symbolic(c.m, null, null, general(c.m));
+        }
+    }
+
+    private static Symbolic build(Chart c, long[] work) {
+        int m = c.m;
         Expr[][] tm = identity(m);
         Expr[][] gam = new Expr[m][m];
         for (int k = 0; k < m; k++) {
@@ -200,7 +223,7 @@ public final class Symbolic {
                     Expr s = new Expr();
                     for (int l = 0; l < m; l++) {
                         if (!tm[i][l].isZero() && !e[l][j].isZero()) {
-                            s.addScaled(tm[i][l].times(e[l][j]), 1, 0);
+                            s.addScaled(tm[i][l].times(e[l][j], work), 1, 0);
                         }
                     }
                     s.clean(1e-12);
@@ -212,7 +235,7 @@ public final class Symbolic {
             }
             tm = next;
         }
-        Expr[][] inv = invert(gam, m);
+        Expr[][] inv = invert(gam, m, work);
         Kind[] kinds = inv == null ? general(m) : classify(inv, m);
         return new Symbolic(m, gam, inv, kinds);
     }
@@ -244,7 +267,7 @@ public final class Symbolic {
     }
 
     /** Gauss–Jordan with unit pivots only; null if at some column no unit pivot exists. */
-    private static Expr[][] invert(Expr[][] g, int m) {
+    private static Expr[][] invert(Expr[][] g, int m, long[] work) {
         Expr[][] a = new Expr[m][];
         for (int i = 0; i < m; i++) {
             a[i] = new Expr[m];
@@ -281,9 +304,9 @@ public final class Symbolic {
             Expr inv = new Expr();
             inv.add(new Mono(new int[m], zr, zi), ur / den, -ui / den);
             for (int j = 0; j < m; j++) {
-                a[c][j] = a[c][j].times(inv);
+                a[c][j] = a[c][j].times(inv, work);
                 a[c][j].clean(1e-12);
-                b[c][j] = b[c][j].times(inv);
+                b[c][j] = b[c][j].times(inv, work);
                 b[c][j].clean(1e-12);
             }
             for (int r = 0; r < m; r++) {
@@ -294,13 +317,13 @@ public final class Symbolic {
                 for (int j = 0; j < m; j++) {
                     if (!a[c][j].isZero()) {
                         Expr na = copy(a[r][j]);
-                        na.addScaled(f.times(a[c][j]), -1, 0);
+                        na.addScaled(f.times(a[c][j], work), -1, 0);
                         na.clean(1e-12);
                         a[r][j] = na;
                     }
                     if (!b[c][j].isZero()) {
                         Expr nb = copy(b[r][j]);
-                        nb.addScaled(f.times(b[c][j]), -1, 0);
+                        nb.addScaled(f.times(b[c][j], work), -1, 0);
                         nb.clean(1e-12);
                         if (nb.t.size() > MAX_TERMS) {
                             return null;
