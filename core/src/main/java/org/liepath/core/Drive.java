@@ -79,7 +79,7 @@ public interface Drive {
         for (int k = 0; k < b.length; k++) {
             b[k] += dt;
         }
-        return Drives.make(t -> self.at(t - dt), b, name() + "(t − " + fmt(dt) + ")", isPiecewiseConstant());
+        return Drives.make(t -> self.at(t - dt), b, name() + "(t" + signed(-dt) + ")", isPiecewiseConstant());
     }
 
     /** @return c(t) on [start, end), zero elsewhere (a window with breakpoints at both ends) */
@@ -90,8 +90,10 @@ public interface Drive {
             throw InvalidInputException.of(Reason.OUT_OF_RANGE, "end", "end > start = " + start, end);
         }
         Drive self = this;
+        // the drive is zero outside the window, so breakpoints outside it are not breakpoints of the result
+        double[] inside = Arrays.stream(breakpoints()).filter(b -> b > start && b < end).toArray();
         return Drives.make(t -> t >= start && t < end ? self.at(t) : 0.0,
-                Drives.merge(breakpoints(), new double[]{start, end}),
+                Drives.merge(inside, new double[]{start, end}),
                 name() + " on [" + fmt(start) + ", " + fmt(end) + ")", isPiecewiseConstant());
     }
 
@@ -109,7 +111,7 @@ public interface Drive {
         Require.finite(omega, "omega");
         Require.finite(phase, "phase");
         return Drives.make(t -> amplitude * Math.cos(omega * t + phase), new double[0],
-                fmt(amplitude) + "·cos(" + fmt(omega) + "t + " + fmt(phase) + ")", false);
+                fmt(amplitude) + "·cos(" + fmt(omega) + "t" + signed(phase) + ")", false);
     }
 
     /** @return a cos(ω t) */
@@ -123,7 +125,7 @@ public interface Drive {
         Require.finite(omega, "omega");
         Require.finite(phase, "phase");
         return Drives.make(t -> amplitude * Math.sin(omega * t + phase), new double[0],
-                fmt(amplitude) + "·sin(" + fmt(omega) + "t + " + fmt(phase) + ")", false);
+                fmt(amplitude) + "·sin(" + fmt(omega) + "t" + signed(phase) + ")", false);
     }
 
     /** @return a exp(−(t − t0)²/(2σ²)) */
@@ -149,7 +151,10 @@ public interface Drive {
         Require.nonNull(values, "values");
         Require.finite(times, "times");
         Require.finite(values, "values");
-        if (values.length == 0 || times.length != values.length + 1) {
+        if (values.length == 0) {
+            throw InvalidInputException.of(Reason.EMPTY, "values", "at least one segment value", "none");
+        }
+        if (times.length != values.length + 1) {
             throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "times", "values.length + 1 = " + (values.length + 1)
                     + " increasing times (values non-empty)", times.length + " times");
         }
@@ -197,9 +202,13 @@ public interface Drive {
         Require.nonNull(values, "values");
         Require.finite(times, "times");
         Require.finite(values, "values");
-        if (times.length < 3 || values.length != times.length) {
+        if (times.length < 3) {
+            throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "times", "at least 3 knots",
+                    times.length + " times");
+        }
+        if (values.length != times.length) {
             throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "values",
-                    "as many values as times, at least 3", times.length + " times and " + values.length + " values");
+                    "as many values as times (" + times.length + ")", values.length + " values");
         }
         for (int k = 1; k < times.length; k++) {
             if (!(times[k] > times[k - 1])) {
@@ -211,6 +220,11 @@ public interface Drive {
         double lo = times[0], hi = times[times.length - 1], vlo = values[0], vhi = values[values.length - 1];
         return Drives.make(t -> t <= lo ? vlo : t >= hi ? vhi : f.value(t), times.clone(),
                 "spline(" + times.length + " knots)", false);
+    }
+
+    /** " + v" or " − |v|" (empty for 0), so that names read "cos(2t − 0.5000)" rather than "cos(2t + -0.5000)". */
+    private static String signed(double v) {
+        return v == 0 ? "" : (v > 0 ? " + " : " − ") + fmt(Math.abs(v));
     }
 
     private static String fmt(double v) {
@@ -233,11 +247,12 @@ final class Drives {
 
     static double[] merge(double[] a, double[] b) {
         TreeSet<Double> s = new TreeSet<>();
+        // + 0.0 maps −0.0 to 0.0: TreeSet orders them as distinct values, which would make a zero-length segment
         for (double x : a) {
-            s.add(x);
+            s.add(x + 0.0);
         }
         for (double x : b) {
-            s.add(x);
+            s.add(x + 0.0);
         }
         double[] out = new double[s.size()];
         int k = 0;

@@ -12,6 +12,13 @@ public class DriveException extends IllegalStateException {
     private final double time;
     private final String driveName;
 
+    /**
+     * @param driveName the failing drive's {@link Drive#name()}
+     * @param term      the index of its term in the Hamiltonian
+     * @param time      the time at which it was evaluated
+     * @param what      what went wrong, e.g. "returned NaN" or "threw …"
+     * @param cause     the drive's exception, or null for a non-finite value
+     */
     public DriveException(String driveName, int term, double time, String what, Throwable cause) {
         super("drive '" + driveName + "' of term " + term + " " + what + " at t = " + time, cause);
         this.term = term;

@@ -63,9 +63,17 @@ public final class Hamiltonian {
     /**
      * Fills {@code out[k] = c_k(t)}.
      *
+     * @throws InvalidInputException if t is not finite or out is null or shorter than {@link #size()}
      * @throws DriveException if a drive throws or returns a non-finite value (names the drive, term and time)
      */
     public void coefficients(double t, double[] out) {
+        // a NaN time would otherwise be blamed on the first drive that returns NaN for it
+        Require.finite(t, "t");
+        if (out == null || out.length < drives.size()) {
+            Require.nonNull(out, "out");
+            throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "out", "length >= " + drives.size(),
+                    "length " + out.length);
+        }
         for (int k = 0; k < drives.size(); k++) {
             Drive d = drives.get(k);
             double v;
@@ -104,7 +112,7 @@ public final class Hamiltonian {
         TreeSet<Double> s = new TreeSet<>();
         for (Drive d : drives) {
             for (double b : d.breakpoints()) {
-                s.add(b);
+                s.add(b + 0.0); // −0.0 and 0.0 are one time, but distinct TreeSet keys
             }
         }
         double[] out = new double[s.size()];
@@ -182,9 +190,26 @@ public final class Hamiltonian {
                         "dimension " + a.dim());
             }
             a.requireHermitian(name);
+            checkBreakpoints(c, "drive of term " + ops.size());
             ops.add(a);
             drives.add(c);
             return this;
+        }
+
+        // a user drive's breakpoints end up as step boundaries of integrators: refuse junk once, here
+        private static void checkBreakpoints(Drive c, String name) {
+            double[] b = c.breakpoints();
+            if (b == null) {
+                throw InvalidInputException.of(Reason.NULL, name, "breakpoints() to return an array (empty for none)",
+                        "null from '" + c.name() + "'");
+            }
+            for (int k = 0; k < b.length; k++) {
+                if (!Double.isFinite(b[k]) || (k > 0 && !(b[k] >= b[k - 1]))) {
+                    throw InvalidInputException.of(Reason.OUT_OF_RANGE, name,
+                            "finite ascending breakpoints from '" + c.name() + "'",
+                            b[k] + " at index " + k + (k > 0 ? " after " + b[k - 1] : ""));
+                }
+            }
         }
 
         /** @return the Hamiltonian; at least one term is required */

@@ -81,6 +81,10 @@ public final class Levels {
     /** @return the d-level ladder a = Σ sqrt(k) |k−1⟩⟨k| truncated to d levels (a harmonic-oscillator annihilator) */
     public static Operator annihilation(int d) {
         Require.positive(d, "d");
+        if (d > Operator.MAX_DIM) {
+            throw InvalidInputException.of(InvalidInputException.Reason.LIMIT_EXCEEDED, "d",
+                    "a dimension ≤ " + Operator.MAX_DIM, d);
+        }
         double[] re = new double[d * d];
         for (int k = 1; k < d; k++) {
             re[(k - 1) * d + k] = Math.sqrt(k);

@@ -99,6 +99,22 @@ public final class Lindbladian {
         return "Lindbladian (dimension " + h.dim() + ", " + h.size() + " Hamiltonian terms, " + jumps.size() + " jumps)";
     }
 
+    /**
+     * The steady state of a time-independent generator: the unique density matrix ρ with L(ρ) = 0 and tr ρ = 1, found
+     * as the null vector of the n²×n² generator (see {@link Superoperator#steadyState()}); the result is made exactly
+     * Hermitian by averaging with its adjoint (the exact null state of a GKLS generator is Hermitian). Cost O(n⁶).
+     *
+     * @throws InvalidInputException with reason UNSUPPORTED if H is time dependent or the steady state is not unique
+     */
+    public Operator steadyState() {
+        if (!isTimeIndependent()) {
+            throw InvalidInputException.of(Reason.UNSUPPORTED, "this", "a time-independent Hamiltonian",
+                    "a time-dependent one (" + h.size() + " terms)");
+        }
+        Operator rho = at(0.0).steadyState();
+        return rho.plus(rho.dagger()).scale(0.5);
+    }
+
     /** Mutable builder; not thread-safe. */
     public static final class Builder {
         private final Hamiltonian h;

@@ -8,7 +8,6 @@ import org.liepath.core.internal.Expm;
 import org.liepath.core.internal.HermitianExp;
 import org.liepath.core.internal.Require;
 
-import java.util.Arrays;
 import java.util.Locale;
 
 /**
@@ -16,7 +15,8 @@ import java.util.Locale;
  *
  * <p>Storage is planar and row-major (entry (i, j) is {@code re(i,j) + i·im(i,j)}); every operation returns a new
  * operator and never modifies its inputs. Factories copy the caller's arrays. Entries are always finite: factories
- * refuse NaN and infinities with an {@link InvalidInputException}.
+ * refuse NaN and infinities with an {@link InvalidInputException}, and the arithmetic methods throw one (reason
+ * NOT_FINITE) when a result overflows.
  *
  * <p>Cost: {@link #times} and {@link #commutator} are O(n³) (8n³ flops per product), {@link #exp} is about
  * 6 products and one LU solve plus log₂‖A‖₁ squarings, {@link #kron} is O(n²m²). Intended sizes: 1 … a few hundred.
@@ -24,6 +24,9 @@ import java.util.Locale;
  * <p>Thread-safety: instances are immutable and safe to share between threads.
  */
 public final class Operator {
+    /** Largest dimension n whose n² entries fit in one Java array (46340² &lt; 2³¹). */
+    public static final int MAX_DIM = 46340;
+
     final int n;
     final double[] re;
     final double[] im;
@@ -73,7 +76,7 @@ public final class Operator {
      * @throws InvalidInputException if lengths differ from n², or an entry is not finite
      */
     public static Operator ofPlanar(int n, double[] re, double[] im) {
-        Require.positive(n, "n");
+        checkDim(n, "n");
         Require.nonNull(re, "re");
         Require.nonNull(im, "im");
         if (re.length != n * n) {
@@ -89,7 +92,7 @@ public final class Operator {
 
     /** The n×n identity. */
     public static Operator identity(int n) {
-        Require.positive(n, "n");
+        checkDim(n, "n");
         double[] r = new double[n * n];
         for (int i = 0; i < n; i++) {
             r[i * n + i] = 1;
@@ -99,7 +102,7 @@ public final class Operator {
 
     /** The n×n zero operator. */
     public static Operator zero(int n) {
-        Require.positive(n, "n");
+        checkDim(n, "n");
         return new Operator(n, new double[n * n], new double[n * n]);
     }
 
@@ -120,7 +123,7 @@ public final class Operator {
 
     /** The matrix unit |i⟩⟨j| of dimension n (a single 1 at row i, column j). */
     public static Operator unit(int n, int i, int j) {
-        Require.positive(n, "n");
+        checkDim(n, "n");
         Require.index(i, n, "i");
         Require.index(j, n, "j");
         double[] r = new double[n * n];
@@ -258,7 +261,7 @@ public final class Operator {
             r[k] = re[k] + b.re[k];
             i[k] = im[k] + b.im[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "b", "sum");
     }
 
     /** @return this − b */
@@ -269,7 +272,7 @@ public final class Operator {
             r[k] = re[k] - b.re[k];
             i[k] = im[k] - b.im[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "b", "difference");
     }
 
     /** @return the matrix product this·b */
@@ -277,7 +280,7 @@ public final class Operator {
         same(b, "b");
         double[] r = new double[n * n], i = new double[n * n];
         Dense.mul(n, re, im, b.re, b.im, r, i);
-        return new Operator(n, r, i);
+        return checked(n, r, i, "b", "product");
     }
 
     /** @return s·this */
@@ -288,7 +291,7 @@ public final class Operator {
             r[k] = s * re[k];
             i[k] = s * im[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "s", "multiple");
     }
 
     /** @return z·this */
@@ -300,7 +303,7 @@ public final class Operator {
             r[k] = zr * re[k] - zi * im[k];
             i[k] = zr * im[k] + zi * re[k];
         }
-        return new Operator(n, r, i);
+        return checked(n, r, i, "z", "multiple");
     }
 
     /** @return i·this (exact, no rounding) */
@@ -356,7 +359,7 @@ public final class Operator {
             r1[k] -= r2[k];
             i1[k] -= i2[k];
         }
-        return new Operator(n, r1, i1);
+        return checked(n, r1, i1, "b", "commutator");
     }
 
     /** @return the anticommutator {this, b} = this·b + b·this */
@@ -369,7 +372,7 @@ public final class Operator {
             r1[k] += r2[k];
             i1[k] += i2[k];
         }
-        return new Operator(n, r1, i1);
+        return checked(n, r1, i1, "b", "anticommutator");
     }
 
     /** @return the trace */
@@ -396,7 +399,7 @@ public final class Operator {
 
     /** @return the Frobenius (Hilbert–Schmidt) norm sqrt(tr(A†A)) */
     public double norm() {
-        return Dense.frobenius(n * n, re, im);
+        return safeNorm(re, im);
     }
 
     /** @return the matrix 1-norm (maximum column sum of moduli) */
@@ -412,7 +415,15 @@ public final class Operator {
             double dr = re[k] - b.re[k], di = im[k] - b.im[k];
             s += dr * dr + di * di;
         }
-        return Math.sqrt(s);
+        if (inRange(s)) {
+            return Math.sqrt(s);
+        }
+        Ssq q = new Ssq();
+        for (int k = 0; k < n * n; k++) {
+            q.add(0.5 * re[k] - 0.5 * b.re[k]);
+            q.add(0.5 * im[k] - 0.5 * b.im[k]);
+        }
+        return 2 * q.value();
     }
 
     /**
@@ -435,12 +446,26 @@ public final class Operator {
                 s += dr * dr + di * di;
             }
         }
-        return Math.sqrt(s);
+        if (inRange(s)) {
+            return Math.sqrt(s);
+        }
+        Ssq q = new Ssq();
+        for (int a = 0; a < n; a++) {
+            for (int b = 0; b < n; b++) {
+                q.add(0.5 * re[a * n + b] - 0.5 * re[b * n + a]);
+                q.add(0.5 * im[a * n + b] + 0.5 * im[b * n + a]);
+            }
+        }
+        return 2 * q.value();
     }
 
     /** @return the Kronecker product this ⊗ b (this is the left, slower-varying factor) */
     public Operator kron(Operator b) {
         Require.nonNull(b, "b");
+        if ((long) n * b.n > MAX_DIM) {
+            throw InvalidInputException.of(Reason.LIMIT_EXCEEDED, "b", "a product dimension ≤ " + MAX_DIM,
+                    n + " × " + b.n + " = " + (long) n * b.n);
+        }
         int m = b.n, nm = n * m;
         double[] r = new double[nm * nm], i = new double[nm * nm];
         for (int a1 = 0; a1 < n; a1++) {
@@ -459,7 +484,7 @@ public final class Operator {
                 }
             }
         }
-        return new Operator(nm, r, i);
+        return checked(nm, r, i, "b", "Kronecker product");
     }
 
     /**
@@ -517,17 +542,41 @@ public final class Operator {
             return false;
         }
         Operator b = (Operator) o;
-        return n == b.n && Arrays.equals(re, b.re) && Arrays.equals(im, b.im);
+        // entries are finite, so == is numeric equality; Arrays.equals would tell 0.0 from −0.0 (e.g. zero vs −1·zero)
+        if (n != b.n) {
+            return false;
+        }
+        for (int k = 0; k < n * n; k++) {
+            if (re[k] != b.re[k] || im[k] != b.im[k]) {
+                return false;
+            }
+        }
+        return true;
     }
 
     @Override
     public int hashCode() {
-        return 31 * (31 * n + Arrays.hashCode(re)) + Arrays.hashCode(im);
+        return 31 * (31 * n + zeroSafeHash(re)) + zeroSafeHash(im);
     }
 
-    /** A readable matrix, one row per line, entries to 4 significant digits; large operators are abbreviated. */
+    /** A hash consistent with numeric equality: 0.0 and −0.0 hash alike. */
+    static int zeroSafeHash(double[] a) {
+        int h = 1;
+        for (double v : a) {
+            long bits = Double.doubleToLongBits(v + 0.0);
+            h = 31 * h + (int) (bits ^ (bits >>> 32));
+        }
+        return h;
+    }
+
+    /**
+     * A readable matrix, one row per line, entries to 4 significant digits; large operators are abbreviated. Parts
+     * below 1e-14 of the largest entry modulus print as 0 (rounding noise), so a matrix of tiny numbers still prints
+     * its values.
+     */
     @Override
     public String toString() {
+        double tiny = noiseFloor(re, im);
         StringBuilder sb = new StringBuilder();
         sb.append("Operator ").append(n).append('x').append(n);
         int shown = Math.min(n, 8);
@@ -537,7 +586,7 @@ public final class Operator {
                 if (b > 0) {
                     sb.append(", ");
                 }
-                sb.append(formatEntry(re[a * n + b], im[a * n + b]));
+                sb.append(formatEntry(re[a * n + b], im[a * n + b], tiny));
             }
             if (shown < n) {
                 sb.append(", …");
@@ -550,8 +599,16 @@ public final class Operator {
         return sb.toString();
     }
 
-    static String formatEntry(double r, double i) {
-        double tiny = 1e-14;
+    /** 1e-14 times the largest entry modulus: parts below it are shown as 0 by {@link #formatEntry}. */
+    static double noiseFloor(double[] re, double[] im) {
+        double max = 0;
+        for (int k = 0; k < re.length; k++) {
+            max = Math.max(max, Math.max(Math.abs(re[k]), Math.abs(im[k])));
+        }
+        return 1e-14 * max;
+    }
+
+    static String formatEntry(double r, double i, double tiny) {
         boolean hasR = Math.abs(r) > tiny, hasI = Math.abs(i) > tiny;
         if (!hasR && !hasI) {
             return "0";
@@ -570,5 +627,116 @@ public final class Operator {
             return Long.toString((long) v);
         }
         return String.format(Locale.ROOT, "%.4g", v);
+    }
+
+    // ------------------------------------------------------------------ added conveniences
+
+    /**
+     * The matrix power A^k for k ≥ 0 (A⁰ = I) by repeated squaring: about 2·log₂k products, each O(n³).
+     *
+     * @throws InvalidInputException if k is negative, or with reason NOT_FINITE if the result overflows
+     */
+    public Operator power(int k) {
+        if (k < 0) {
+            throw InvalidInputException.of(Reason.OUT_OF_RANGE, "k", "a non-negative exponent", k);
+        }
+        int len = n * n;
+        double[] rr = new double[len], ri = new double[len], br = re.clone(), bi = im.clone();
+        double[] tr = new double[len], ti = new double[len];
+        for (int q = 0; q < n; q++) {
+            rr[q * n + q] = 1;
+        }
+        for (int e = k; e > 0; e >>= 1) {
+            if ((e & 1) != 0) {
+                Dense.mul(n, rr, ri, br, bi, tr, ti);
+                System.arraycopy(tr, 0, rr, 0, len);
+                System.arraycopy(ti, 0, ri, 0, len);
+            }
+            if (e > 1) {
+                Dense.mul(n, br, bi, br, bi, tr, ti);
+                System.arraycopy(tr, 0, br, 0, len);
+                System.arraycopy(ti, 0, bi, 0, len);
+            }
+        }
+        for (int q = 0; q < len; q++) {
+            if (!Double.isFinite(rr[q]) || !Double.isFinite(ri[q])) {
+                throw InvalidInputException.of(Reason.NOT_FINITE, "k", "a power whose entries are finite",
+                        k + " (overflow, ‖A‖₁ = " + norm1() + ")");
+            }
+        }
+        return new Operator(n, rr, ri);
+    }
+
+    /**
+     * Wraps a result after checking it is finite: finite inputs can still overflow, and the class promises finite
+     * entries (an O(n²) scan, small next to the work that produced the result).
+     */
+    private static Operator checked(int n, double[] r, double[] i, String argument, String what) {
+        for (int k = 0; k < r.length; k++) {
+            if (!Double.isFinite(r[k]) || !Double.isFinite(i[k])) {
+                throw InvalidInputException.of(Reason.NOT_FINITE, argument, "operands whose " + what + " is finite",
+                        "an overflow at entry (" + k / n + ", " + k % n + ")");
+            }
+        }
+        return new Operator(n, r, i);
+    }
+
+    /**
+     * Whether a plain sum of squares can be trusted: finite (no overflow) and large enough that its dominant terms
+     * were normal numbers (entries below ~1e-154 square to subnormals or zero).
+     */
+    static boolean inRange(double sumOfSquares) {
+        // a zero sum may hide non-zero entries whose squares underflowed, so it takes the scaled pass too
+        return sumOfSquares < Double.POSITIVE_INFINITY && sumOfSquares > 1e-290;
+    }
+
+    /**
+     * sqrt(Σ re² + im²) without overflow or underflow: the plain sum when it is in range, else a scaled pass
+     * (the scale-and-sum update of the reference BLAS dnrm2; S. J. Hammarling, 1979 — common practice).
+     */
+    static double safeNorm(double[] re, double[] im) {
+        double s = 0;
+        for (int k = 0; k < re.length; k++) {
+            s += re[k] * re[k] + im[k] * im[k];
+        }
+        if (inRange(s)) {
+            return Math.sqrt(s);
+        }
+        Ssq q = new Ssq();
+        for (int k = 0; k < re.length; k++) {
+            q.add(re[k]);
+            q.add(im[k]);
+        }
+        return q.value();
+    }
+
+    /** Scaled sum of squares: value() = scale·sqrt(sum) = sqrt(Σ x²) for the numbers added. */
+    static final class Ssq {
+        private double scale = 0, sum = 1;
+
+        void add(double x) {
+            if (x != 0) {
+                double a = Math.abs(x);
+                if (scale < a) {
+                    double r = scale / a;
+                    sum = 1 + sum * r * r;
+                    scale = a;
+                } else {
+                    double r = a / scale;
+                    sum += r * r;
+                }
+            }
+        }
+
+        double value() {
+            return scale * Math.sqrt(sum);
+        }
+    }
+
+    private static void checkDim(int n, String name) {
+        Require.positive(n, name);
+        if (n > MAX_DIM) {
+            throw InvalidInputException.of(Reason.LIMIT_EXCEEDED, name, "a dimension ≤ " + MAX_DIM, n);
+        }
     }
 }

@@ -31,7 +31,8 @@ public final class Spin {
     public static Spin of(double j) {
         Require.finite(j, "j");
         double twoJ = 2 * j;
-        if (j <= 0 || Math.abs(twoJ - Math.rint(twoJ)) > 1e-12) {
+        // test the rounded 2j too: j = 1e-13 is within the half-integer tolerance of 0, which is not a positive spin
+        if (j <= 0 || Math.abs(twoJ - Math.rint(twoJ)) > 1e-12 || Math.rint(twoJ) < 1) {
             throw InvalidInputException.of(Reason.OUT_OF_RANGE, "j", "a positive integer or half-integer (½, 1, 3/2, …)", j);
         }
         if (j > MAX_J) {

@@ -5,7 +5,6 @@ import org.liepath.core.InvalidInputException.Reason;
 import org.liepath.core.internal.Dense;
 import org.liepath.core.internal.Require;
 
-import java.util.Arrays;
 import java.util.Locale;
 
 /**
@@ -87,13 +86,17 @@ public final class StateVector {
     public void copyTo(double[] reOut, double[] imOut) {
         Require.nonNull(reOut, "reOut");
         Require.nonNull(imOut, "imOut");
+        if (reOut.length < re.length || imOut.length < re.length) {
+            throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "reOut/imOut", "length >= " + re.length,
+                    reOut.length + "/" + imOut.length);
+        }
         System.arraycopy(re, 0, reOut, 0, re.length);
         System.arraycopy(im, 0, imOut, 0, im.length);
     }
 
     /** @return the Euclidean norm */
     public double norm() {
-        return Dense.frobenius(re.length, re, im);
+        return Operator.safeNorm(re, im);
     }
 
     /** @return this vector divided by its norm */
@@ -102,7 +105,13 @@ public final class StateVector {
         if (s == 0) {
             throw InvalidInputException.of(Reason.OUT_OF_RANGE, "this", "a non-zero vector", "the zero vector");
         }
-        return scale(1 / s);
+        // divide rather than multiply by 1/s, which overflows for norms below ~1e-308
+        double[] r = new double[re.length], i = new double[re.length];
+        for (int k = 0; k < re.length; k++) {
+            r[k] = re[k] / s;
+            i[k] = im[k] / s;
+        }
+        return new StateVector(r, i);
     }
 
     /** @return s·ψ */
@@ -168,32 +177,111 @@ public final class StateVector {
             double dr = re[k] - b.re[k], di = im[k] - b.im[k];
             s += dr * dr + di * di;
         }
-        return Math.sqrt(s);
+        if (Operator.inRange(s)) {
+            return Math.sqrt(s);
+        }
+        Operator.Ssq q = new Operator.Ssq();
+        for (int k = 0; k < re.length; k++) {
+            q.add(0.5 * re[k] - 0.5 * b.re[k]);
+            q.add(0.5 * im[k] - 0.5 * b.im[k]);
+        }
+        return 2 * q.value();
     }
 
+    /** Exact componentwise equality (0.0 equals −0.0; use {@link #distance} for approximate comparison). */
     @Override
     public boolean equals(Object o) {
-        return o instanceof StateVector && Arrays.equals(re, ((StateVector) o).re) && Arrays.equals(im, ((StateVector) o).im);
+        if (!(o instanceof StateVector)) {
+            return false;
+        }
+        StateVector b = (StateVector) o;
+        if (b.re.length != re.length) {
+            return false;
+        }
+        for (int k = 0; k < re.length; k++) {
+            if (re[k] != b.re[k] || im[k] != b.im[k]) {
+                return false;
+            }
+        }
+        return true;
     }
 
     @Override
     public int hashCode() {
-        return 31 * Arrays.hashCode(re) + Arrays.hashCode(im);
+        return 31 * Operator.zeroSafeHash(re) + Operator.zeroSafeHash(im);
     }
 
     @Override
     public String toString() {
+        double tiny = Operator.noiseFloor(re, im);
         StringBuilder sb = new StringBuilder("StateVector ").append(re.length).append(" [");
         int shown = Math.min(re.length, 16);
         for (int k = 0; k < shown; k++) {
             if (k > 0) {
                 sb.append(", ");
             }
-            sb.append(Operator.formatEntry(re[k], im[k]));
+            sb.append(Operator.formatEntry(re[k], im[k], tiny));
         }
         if (shown < re.length) {
             sb.append(String.format(Locale.ROOT, ", … (%d more)", re.length - shown));
         }
         return sb.append(']').toString();
+    }
+
+    // ------------------------------------------------------------------ added conveniences
+
+    /** @return ψ − φ */
+    public StateVector minus(StateVector b) {
+        Require.nonNull(b, "b");
+        Require.sameDim(dim(), b.dim(), "b");
+        double[] r = new double[re.length], i = new double[re.length];
+        for (int k = 0; k < re.length; k++) {
+            r[k] = re[k] - b.re[k];
+            i[k] = im[k] - b.im[k];
+        }
+        return new StateVector(r, i);
+    }
+
+    /** @return z·ψ */
+    public StateVector scale(Complex z) {
+        Require.nonNull(z, "z");
+        double zr = Require.finite(z.getReal(), "z (real part)"), zi = Require.finite(z.getImaginary(), "z (imaginary part)");
+        double[] r = new double[re.length], i = new double[re.length];
+        for (int k = 0; k < re.length; k++) {
+            r[k] = zr * re[k] - zi * im[k];
+            i[k] = zr * im[k] + zi * re[k];
+        }
+        return new StateVector(r, i);
+    }
+
+    /**
+     * The tensor product ψ ⊗ φ (this is the left, slower-varying factor, as in {@link Operator#kron}); dimension
+     * dim(ψ)·dim(φ), which must fit in a Java array.
+     */
+    public StateVector kron(StateVector b) {
+        Require.nonNull(b, "b");
+        long len = (long) re.length * b.re.length;
+        if (len > Integer.MAX_VALUE - 8) {
+            throw InvalidInputException.of(Reason.LIMIT_EXCEEDED, "b", "a product dimension that fits in an array",
+                    re.length + " × " + b.re.length);
+        }
+        int m = b.re.length;
+        double[] r = new double[(int) len], i = new double[(int) len];
+        for (int p = 0; p < re.length; p++) {
+            for (int q = 0; q < m; q++) {
+                r[p * m + q] = re[p] * b.re[q] - im[p] * b.im[q];
+                i[p * m + q] = re[p] * b.im[q] + im[p] * b.re[q];
+            }
+        }
+        return new StateVector(r, i);
+    }
+
+    /** @return the probabilities |ψ_k|², k = 0 … n−1 (a new array) */
+    public double[] probabilities() {
+        double[] p = new double[re.length];
+        for (int k = 0; k < re.length; k++) {
+            p[k] = re[k] * re[k] + im[k] * im[k];
+        }
+        return p;
     }
 }

@@ -26,9 +26,20 @@ final class CoordinateRun {
     final String failure;
     /** True if the run was cancelled by the monitor. */
     final boolean cancelled;
+    /**
+     * U(t, t0) in the chart's own representation at each time of {@link #times} (empty if not available; on success
+     * the last entry is {@link #propagator}).
+     */
+    final List<Operator> propagators;
 
     CoordinateRun(Operator propagator, List<Complex[]> coordinates, double[] times, int charts, long evaluations,
                   long steps, String failure, boolean cancelled) {
+        this(propagator, coordinates, times, charts, evaluations, steps, failure, cancelled, List.of());
+    }
+
+    CoordinateRun(Operator propagator, List<Complex[]> coordinates, double[] times, int charts, long evaluations,
+                  long steps, String failure, boolean cancelled, List<Operator> propagators) {
+        this.propagators = propagators;
         this.propagator = propagator;
         this.coordinates = coordinates;
         this.times = times;

@@ -1,0 +1,168 @@
+package org.liepath.integrators;
+
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.EigenDecomposition;
+import org.liepath.core.Operator;
+import org.liepath.core.StateVector;
+import org.liepath.core.Superoperator;
+
+/**
+ * The outcome of {@link Evolve#run()}: the status, the result in the run's mode, the trajectory, the work done, an
+ * error estimate and the scheme used.
+ *
+ * <p>Modes: a Hamiltonian run gives {@link #propagator()} U(t1, t0), or with {@link Evolve#state} the state
+ * {@link #state()} ψ(t1); a GKLS run gives {@link #channel()} (the dynamical map from t0 to t1), or with
+ * {@link Evolve#density} the density {@link #density()} ρ(t1). The accessor of another mode throws
+ * {@link IllegalStateException}.
+ *
+ * <p><b>Failed runs</b>: when {@link #status()} is not a success, the result accessors throw
+ * {@link IllegalStateException} naming the status, so that a partial result is never mistaken for the answer. The
+ * state reached before the failure is the last sample of {@link #trajectory()}, at time {@code status().time()}.
+ *
+ * <p>Immutable and thread-safe.
+ */
+public final class Evolution {
+    private final Scheme scheme;
+    private final Status status;
+    private final Trajectory.Mode mode;
+    private final int n;
+    private final double[] re, im;
+    private final Trajectory trajectory;
+    private final Stats stats;
+    private final double errorEstimate;
+    private final Coordinates coordinates;
+
+    Evolution(Scheme scheme, Status status, Trajectory.Mode mode, int n, double[] re, double[] im,
+              Trajectory trajectory, Stats stats, double errorEstimate, Coordinates coordinates) {
+        this.scheme = scheme;
+        this.status = status;
+        this.mode = mode;
+        this.n = n;
+        this.re = re;
+        this.im = im;
+        this.trajectory = trajectory;
+        this.stats = stats;
+        this.errorEstimate = errorEstimate;
+        this.coordinates = coordinates;
+    }
+
+    /** @return how the run ended */
+    public Status status() {
+        return status;
+    }
+
+    /** @return the scheme that was requested for the run */
+    public Scheme scheme() {
+        return scheme;
+    }
+
+    /** @return U(t1, t0) of a Hamiltonian run in propagator mode (or a Wei–Norman run) */
+    public Operator propagator() {
+        need(Trajectory.Mode.PROPAGATOR, "propagator()");
+        return Operator.ofPlanar(n, re, im);
+    }
+
+    /** @return ψ(t1) of a Hamiltonian run started with {@link Evolve#state} */
+    public StateVector state() {
+        need(Trajectory.Mode.STATE, "state()");
+        return StateVector.of(re, im);
+    }
+
+    /** @return ρ(t1) of a GKLS run started with {@link Evolve#density} */
+    public Operator density() {
+        need(Trajectory.Mode.DENSITY, "density()");
+        return Trajectory.unvec(n, re, im);
+    }
+
+    /** @return the dynamical map from t0 to t1 of a GKLS run without an initial density (column stacking) */
+    public Superoperator channel() {
+        need(Trajectory.Mode.CHANNEL, "channel()");
+        return Superoperator.ofMatrix(Operator.ofPlanar(n * n, re, im));
+    }
+
+    /**
+     * Positivity of an open-system result: the smallest eigenvalue of ρ(t1) (density mode) or of the Choi matrix of
+     * the map (channel mode; ≥ 0 up to rounding for a completely positive map). Computed from the real symmetric
+     * 2k×2k embedding [[Re, −Im], [Im, Re]] of the Hermitian part with Commons Math (each eigenvalue appears twice).
+     *
+     * @throws IllegalStateException for a closed-system run or a failed run
+     */
+    public double minEigenvalue() {
+        if (mode == Trajectory.Mode.DENSITY) {
+            return minEigenvalue(density());
+        }
+        if (mode == Trajectory.Mode.CHANNEL) {
+            return minEigenvalue(channel().choi());
+        }
+        throw new IllegalStateException("minEigenvalue() needs an open-system run; this run gave a "
+                + mode.name().toLowerCase());
+    }
+
+    static double minEigenvalue(Operator a) {
+        int k = a.dim();
+        double[][] e = new double[2 * k][2 * k];
+        for (int i = 0; i < k; i++) {
+            for (int j = 0; j < k; j++) {
+                double r = 0.5 * (a.re(i, j) + a.re(j, i)), s = 0.5 * (a.im(i, j) - a.im(j, i));
+                e[i][j] = r;
+                e[i + k][j + k] = r;
+                e[i + k][j] = s;
+                e[i][j + k] = -s;
+            }
+        }
+        double[] ev = new EigenDecomposition(new Array2DRowRealMatrix(e, false)).getRealEigenvalues();
+        double min = Double.POSITIVE_INFINITY;
+        for (double v : ev) {
+            min = Math.min(min, v);
+        }
+        return min;
+    }
+
+    /** @return the samples of the run (always including t0 and the time reached) */
+    public Trajectory trajectory() {
+        return trajectory;
+    }
+
+    /** @return the work done */
+    public Stats stats() {
+        return stats;
+    }
+
+    /**
+     * An estimate of the global error of an adaptive run: the sum of the accepted local error estimates, each
+     * relative to the Frobenius norm of the state (a bound under linear accumulation; conservative for schemes
+     * whose estimate measures a lower-order partner). NaN for fixed-step runs, the reference integrator and
+     * Wei–Norman runs; 0 for exact piecewise stepping.
+     */
+    public double errorEstimate() {
+        return errorEstimate;
+    }
+
+    /**
+     * @return the Wei–Norman coordinates of a run with {@link Scheme#weiNorman}
+     * @throws IllegalStateException for other schemes
+     */
+    public Coordinates coordinates() {
+        if (coordinates == null) {
+            throw new IllegalStateException("coordinates() needs a run with Scheme.weiNorman(chart); this run used "
+                    + scheme.name());
+        }
+        return coordinates;
+    }
+
+    private void need(Trajectory.Mode wanted, String what) {
+        if (!status.isSuccess()) {
+            throw new IllegalStateException(what + " is not available: the run ended with " + status
+                    + " (the state reached is the last sample of trajectory())");
+        }
+        if (mode != wanted) {
+            throw new IllegalStateException(what + " is not available: this run computed a "
+                    + mode.name().toLowerCase());
+        }
+    }
+
+    @Override
+    public String toString() {
+        return "Evolution [" + scheme.name() + ", " + status + "]\n" + stats;
+    }
+}

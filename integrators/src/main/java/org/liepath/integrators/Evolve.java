@@ -1,0 +1,453 @@
+package org.liepath.integrators;
+
+import org.apache.commons.math3.complex.Complex;
+import org.liepath.core.DriveException;
+import org.liepath.core.Hamiltonian;
+import org.liepath.core.InvalidInputException;
+import org.liepath.core.InvalidInputException.Reason;
+import org.liepath.core.Lindbladian;
+import org.liepath.core.Operator;
+import org.liepath.core.ProgressListener;
+import org.liepath.core.StateVector;
+import org.liepath.core.internal.Require;
+import org.liepath.integrators.internal.Kernel;
+import org.liepath.integrators.internal.LinearSystem;
+import org.liepath.integrators.internal.PiecewiseKernel;
+import org.liepath.integrators.internal.ReferenceRunner;
+import org.liepath.integrators.internal.Run;
+import org.liepath.integrators.internal.Runner;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * The evolution builder: {@code Evolve.of(h).over(t0, t1).scheme(s).tolerance(tol).run()}.
+ *
+ * <p>Solves dU/dt = −iH(t)U, U(t0) = I (ħ = 1) for a {@link Hamiltonian}, or dρ/dt = L(t)[ρ] for a
+ * {@link Lindbladian} in Liouville space (column stacking). Every call returns a new immutable configuration, so a
+ * configuration can be shared between threads and reused; {@link #run()} does the work and allocates its own
+ * workspace, so many threads may run the same configuration at once with identical results.
+ *
+ * <p><b>Defaults</b> when a run names neither: scheme {@link Scheme#commutatorFree4Opt()}, adaptive steps with
+ * tolerance {@value #DEFAULT_TOLERANCE}, at most {@value #DEFAULT_MAX_STEPS} steps. {@link #tolerance} and
+ * {@link #steps} exclude each other: the later call wins.
+ *
+ * <p><b>Tolerance</b>: an adaptive step is accepted when its local error estimate, relative to the Frobenius norm of
+ * the state, is at most tol. Steps always land exactly on the drives' breakpoints and on sample times. A generator
+ * that is piecewise constant (in particular time independent) is stepped exactly in adaptive runs, one exponential
+ * per constant segment, whatever the scheme (the reference integrator excepted).
+ *
+ * <p><b>Fixed steps</b> {@code steps(n)}: dt = (t1 − t0)/n and step k starts at t0 + k·dt; a step containing a
+ * breakpoint or a sample time is split there. Without sample times this is bit for bit the sequence of
+ * {@link Stepper#advance} calls on the same grid.
+ *
+ * <p><b>Modes</b>: propagator (default for a Hamiltonian), state vector ({@link #state}), dynamical map (default for
+ * a Lindbladian, {@link Evolution#channel()}) and density ({@link #density}). Dense exponentials in the propagator
+ * and channel modes (sizes up to a few hundred); vector states (ψ, or vec(ρ)) of dimension ≥ 48 get each
+ * exponential as a Krylov action (Lanczos or Arnoldi, accuracy 1e-14 per exponential), falling back to the dense
+ * exponential if Krylov cannot converge.
+ *
+ * <p>Bad input throws {@link InvalidInputException} at the call that supplies it, or at {@link #run()} for
+ * combinations (no interval, a scheme that cannot serve the problem, sample times outside the interval). Numerical
+ * trouble during the run is reported in {@link Evolution#status()}.
+ */
+public final class Evolve {
+    /** Default relative local tolerance of adaptive runs. */
+    public static final double DEFAULT_TOLERANCE = 1e-8;
+    /** Default step limit of adaptive runs. */
+    public static final long DEFAULT_MAX_STEPS = 1_000_000;
+    /** Allowed departure of an initial state's norm (or a density's trace) from 1. */
+    static final double NORMALISATION_SLACK = 1e-10;
+
+    private final Hamiltonian h;
+    private final Lindbladian l;
+    private double t0 = Double.NaN, t1 = Double.NaN;
+    private Scheme scheme;
+    private double tolerance = Double.NaN;
+    private int steps;
+    private StateVector psi;
+    private Operator rho0;
+    private ProgressListener monitor = ProgressListener.NONE;
+    private double[] samples = new double[0];
+    private boolean everyStep;
+    private StepObserver observer;
+    private long maxSteps = DEFAULT_MAX_STEPS;
+
+    private Evolve(Hamiltonian h, Lindbladian l) {
+        this.h = h;
+        this.l = l;
+    }
+
+    private Evolve copy() {
+        Evolve e = new Evolve(h, l);
+        e.t0 = t0;
+        e.t1 = t1;
+        e.scheme = scheme;
+        e.tolerance = tolerance;
+        e.steps = steps;
+        e.psi = psi;
+        e.rho0 = rho0;
+        e.monitor = monitor;
+        e.samples = samples;
+        e.everyStep = everyStep;
+        e.observer = observer;
+        e.maxSteps = maxSteps;
+        return e;
+    }
+
+    /** @return a configuration evolving under the Hamiltonian h (propagator mode until {@link #state} is given) */
+    public static Evolve of(Hamiltonian h) {
+        Require.nonNull(h, "h");
+        return new Evolve(h, null);
+    }
+
+    /** @return a configuration evolving under the GKLS generator l (dynamical-map mode until {@link #density}) */
+    public static Evolve of(Lindbladian l) {
+        Require.nonNull(l, "l");
+        return new Evolve(null, l);
+    }
+
+    /**
+     * The time interval. t1 &lt; t0 is a legal backward run (it gives the inverse propagator U(t0, t1)⁻¹ = U(t1, t0)).
+     *
+     * @throws InvalidInputException for a non-finite time or t0 == t1
+     */
+    public Evolve over(double t0, double t1) {
+        Require.finite(t0, "t0");
+        Require.finite(t1, "t1");
+        if (t0 == t1) {
+            throw InvalidInputException.of(Reason.OUT_OF_RANGE, "t1", "an end time different from t0 = " + t0, t1);
+        }
+        Evolve e = copy();
+        e.t0 = t0;
+        e.t1 = t1;
+        return e;
+    }
+
+    /** @return a copy using scheme s */
+    public Evolve scheme(Scheme s) {
+        Require.nonNull(s, "scheme");
+        Evolve e = copy();
+        e.scheme = s;
+        return e;
+    }
+
+    /**
+     * Adaptive steps with relative local tolerance tol (see the class comment); clears {@link #steps}.
+     *
+     * @throws InvalidInputException unless 0 &lt; tol &lt; ∞
+     */
+    public Evolve tolerance(double tol) {
+        Require.positive(tol, "tolerance");
+        Evolve e = copy();
+        e.tolerance = tol;
+        e.steps = 0;
+        return e;
+    }
+
+    /**
+     * n fixed steps of equal length (split at breakpoints and sample times); clears {@link #tolerance}.
+     *
+     * @throws InvalidInputException unless n ≥ 1
+     */
+    public Evolve steps(int n) {
+        Require.positive(n, "steps");
+        Evolve e = copy();
+        e.steps = n;
+        e.tolerance = Double.NaN;
+        return e;
+    }
+
+    /**
+     * State-vector mode: evolve ψ(t0) = psi instead of the propagator (cost per step O(n²) per exponential applied,
+     * plus the exponential itself). The state must be normalised to within {@value #NORMALISATION_SLACK}: an
+     * unnormalised state is refused rather than silently rescaled (use {@link StateVector#normalized()}).
+     *
+     * @throws InvalidInputException for a wrong dimension (DIMENSION_MISMATCH), an unnormalised state
+     *                               (OUT_OF_RANGE), or a Lindbladian configuration (UNSUPPORTED: use {@link #density})
+     */
+    public Evolve state(StateVector psi) {
+        Require.nonNull(psi, "psi");
+        if (l != null) {
+            throw InvalidInputException.of(Reason.UNSUPPORTED, "psi", "a density matrix for a GKLS evolution "
+                    + "(use density(rho0))", "a state vector");
+        }
+        Require.sameDim(h.dim(), psi.dim(), "psi");
+        double norm = psi.norm();
+        if (!(Math.abs(norm - 1) <= NORMALISATION_SLACK)) {
+            throw InvalidInputException.of(Reason.OUT_OF_RANGE, "psi", "a normalised state (norm 1 ± "
+                    + NORMALISATION_SLACK + "; use psi.normalized())", "norm " + norm);
+        }
+        Evolve e = copy();
+        e.psi = psi;
+        return e;
+    }
+
+    /**
+     * Density mode for a GKLS evolution: evolve ρ(t0) = rho0. rho0 must be Hermitian (relative defect ≤ 1e-12) with
+     * unit trace (± {@value #NORMALISATION_SLACK}); positivity is not checked.
+     *
+     * @throws InvalidInputException for a wrong dimension, a non-Hermitian operator, a trace other than 1, or a
+     *                               Hamiltonian configuration (UNSUPPORTED)
+     */
+    public Evolve density(Operator rho0) {
+        Require.nonNull(rho0, "rho0");
+        if (l == null) {
+            throw InvalidInputException.of(Reason.UNSUPPORTED, "rho0", "a state vector for a Hamiltonian evolution "
+                    + "(use state(psi), or a Lindbladian without jumps)", "a density matrix");
+        }
+        Require.sameDim(l.dim(), rho0.dim(), "rho0");
+        rho0.requireHermitian("rho0");
+        Complex tr = rho0.trace();
+        if (!(Math.abs(tr.getReal() - 1) <= NORMALISATION_SLACK)) {
+            throw InvalidInputException.of(Reason.OUT_OF_RANGE, "rho0", "unit trace (1 ± " + NORMALISATION_SLACK
+                    + ")", "trace " + tr.getReal());
+        }
+        Evolve e = copy();
+        e.rho0 = rho0;
+        return e;
+    }
+
+    /**
+     * A progress listener called after every accepted step with the fraction of the interval done and the number of
+     * accepted steps; returning false cancels the run (status CANCELLED, the partial state in the trajectory). A
+     * listener that throws is not called again and the run goes on; the failure is recorded in
+     * {@link Stats#monitorFailure()} and the status message.
+     */
+    public Evolve monitor(ProgressListener listener) {
+        Require.nonNull(listener, "listener");
+        Evolve e = copy();
+        e.monitor = listener;
+        return e;
+    }
+
+    /** An observer called after every accepted step (see {@link StepObserver}; failures handled as for monitors). */
+    public Evolve observe(StepObserver obs) {
+        Require.nonNull(obs, "observer");
+        Evolve e = copy();
+        e.observer = obs;
+        return e;
+    }
+
+    /**
+     * Records the result at these times (finite, inside the closed interval, checked at {@link #run()}); steps land on
+     * them exactly.
+     */
+    public Evolve sampleAt(double... times) {
+        Require.finite(times, "times");
+        Evolve e = copy();
+        e.samples = times.clone();
+        return e;
+    }
+
+    /** Records the result after every accepted step. */
+    public Evolve sampleEveryStep() {
+        Evolve e = copy();
+        e.everyStep = true;
+        return e;
+    }
+
+    /**
+     * The step limit of adaptive runs (attempted steps, accepted or rejected; default {@value #DEFAULT_MAX_STEPS});
+     * reaching it ends the run with STEP_LIMIT. Fixed-step runs take exactly their steps.
+     */
+    public Evolve maxSteps(long n) {
+        if (n <= 0) {
+            throw InvalidInputException.of(Reason.OUT_OF_RANGE, "maxSteps", "a positive step limit", n);
+        }
+        Evolve e = copy();
+        e.maxSteps = n;
+        return e;
+    }
+
+    /**
+     * Integrates.
+     *
+     * @throws InvalidInputException if no interval was given, a sample time lies outside it, or the scheme cannot
+     *                               serve the problem (UNSUPPORTED: piecewise-exact stepping of drives that are not
+     *                               piecewise constant, fixed steps with the reference or a Wei–Norman scheme, a
+     *                               Wei–Norman scheme for a Lindbladian)
+     */
+    public Evolution run() {
+        if (Double.isNaN(t0)) {
+            throw InvalidInputException.of(Reason.NULL, "interval", "an interval set with over(t0, t1)", "none");
+        }
+        double lo = Math.min(t0, t1), hi = Math.max(t0, t1);
+        for (double s : samples) {
+            if (s < lo || s > hi) {
+                throw InvalidInputException.of(Reason.OUT_OF_RANGE, "times", "sample times in [" + lo + ", " + hi
+                        + "]", s);
+            }
+        }
+        Scheme s = scheme == null ? Scheme.commutatorFree4Opt() : scheme;
+        Hamiltonian ham = h != null ? h : l.hamiltonian();
+        s.requirePiecewise(h != null ? "h" : "l", ham.isPiecewiseConstant());
+        boolean adaptive = steps == 0;
+        double tol = Double.isNaN(tolerance) ? DEFAULT_TOLERANCE : tolerance;
+        if (s.kind == Scheme.Kind.WEI_NORMAN) {
+            return weiNorman(s, tol);
+        }
+        if (s.kind == Scheme.Kind.REFERENCE && !adaptive) {
+            throw InvalidInputException.of(Reason.UNSUPPORTED, "steps", "an adaptive run for " + s.name()
+                    + " (use tolerance(tol))", steps + " fixed steps");
+        }
+        LinearSystem sys = h != null ? LinearSystem.of(h) : LinearSystem.of(l);
+        int n = ham.dim(), m = sys.dim();
+        Trajectory.Mode mode = h != null ? (psi != null ? Trajectory.Mode.STATE : Trajectory.Mode.PROPAGATOR)
+                : (rho0 != null ? Trajectory.Mode.DENSITY : Trajectory.Mode.CHANNEL);
+        Run.Spec spec = new Run.Spec();
+        spec.t0 = t0;
+        spec.t1 = t1;
+        spec.adaptive = adaptive;
+        spec.tolerance = tol;
+        spec.steps = steps;
+        spec.maxSteps = maxSteps;
+        spec.samples = samples.clone();
+        spec.everyStep = everyStep;
+        spec.monitor = monitor;
+        StepObserver obs = observer;
+        spec.observer = obs == null ? null : obs::onStep;
+        if (mode == Trajectory.Mode.STATE) {
+            spec.p = 1;
+            spec.x0r = new double[m];
+            spec.x0i = new double[m];
+            psi.copyTo(spec.x0r, spec.x0i);
+        } else if (mode == Trajectory.Mode.DENSITY) {
+            spec.p = 1;
+            spec.x0r = new double[m];
+            spec.x0i = new double[m];
+            Trajectory.vec(rho0, spec.x0r, spec.x0i);
+        } else {
+            spec.p = m;
+            spec.x0r = new double[m * m];
+            spec.x0i = new double[m * m];
+            for (int i = 0; i < m; i++) {
+                spec.x0r[i * m + i] = 1;
+            }
+        }
+        Run.Result r;
+        if (s.kind == Scheme.Kind.REFERENCE) {
+            r = ReferenceRunner.run(sys, spec);
+        } else {
+            Kernel k = adaptive && sys.isPiecewiseConstant() ? new PiecewiseKernel(sys) : s.kernel(sys);
+            r = Runner.run(k, spec);
+        }
+        return wrap(s, mode, n, r);
+    }
+
+    private static Evolution wrap(Scheme s, Trajectory.Mode mode, int n, Run.Result r) {
+        Status status = status(Status.Kind.valueOf(r.outcome.name()), r.message, r.monitorFailure,
+                r.observerFailure, r.timeReached);
+        Stats stats = new Stats(r.accepted, r.rejected, r.evaluations, r.exponentials, r.commutators, 0, r.nanos,
+                r.monitorFailure, r.observerFailure);
+        Trajectory traj = new Trajectory(mode, n, r.sampleTimes, r.sampleRe, r.sampleIm);
+        return new Evolution(s, status, mode, n, r.xr, r.xi, traj, stats, r.errorSum, null);
+    }
+
+    private static Status status(Status.Kind kind, String message, String monitorFailure, String observerFailure,
+                                 double time) {
+        StringBuilder sb = new StringBuilder(message == null ? "" : message);
+        for (String extra : new String[]{monitorFailure, observerFailure}) {
+            if (extra != null) {
+                sb.append(sb.length() == 0 ? "" : "; ").append(extra);
+            }
+        }
+        return new Status(kind, sb.toString(), time);
+    }
+
+    private Evolution weiNorman(Scheme s, double tol) {
+        if (l != null) {
+            throw InvalidInputException.of(Reason.UNSUPPORTED, "scheme", "a scheme for GKLS generators",
+                    s.name() + " (Hamiltonians only)");
+        }
+        if (steps != 0) {
+            throw InvalidInputException.of(Reason.UNSUPPORTED, "steps", "an adaptive run for " + s.name()
+                    + " (use tolerance(tol))", steps + " fixed steps");
+        }
+        if (everyStep) {
+            throw InvalidInputException.of(Reason.UNSUPPORTED, "sampleEveryStep", "sampleAt(times) for " + s.name(),
+                    "sampleEveryStep()");
+        }
+        String[] monitorFailure = {null};
+        ProgressListener user = monitor;
+        ProgressListener guarded = new ProgressListener() {
+            private boolean alive = true;
+
+            @Override
+            public boolean onProgress(double fraction, long count) {
+                if (!alive) {
+                    return true;
+                }
+                try {
+                    return user.onProgress(fraction, count);
+                } catch (RuntimeException e) {
+                    alive = false;
+                    monitorFailure[0] = "progress listener threw " + e + " after step " + count
+                            + "; it was not called again";
+                    return true;
+                }
+            }
+        };
+        long start = System.nanoTime();
+        double[] sorted = samples.clone();
+        Arrays.sort(sorted);
+        if (t1 < t0) {
+            for (int i = 0; i < sorted.length / 2; i++) {
+                double tmp = sorted[i];
+                sorted[i] = sorted[sorted.length - 1 - i];
+                sorted[sorted.length - 1 - i] = tmp;
+            }
+        }
+        CoordinateRun cr;
+        try {
+            cr = s.chart.integrate(h, t0, t1, tol, sorted, guarded);
+        } catch (DriveException e) {
+            Status st = status(Status.Kind.DRIVE_FAILED, e.getMessage(), monitorFailure[0], null, e.time());
+            Stats stats = new Stats(0, 0, 0, 0, 0, 0, System.nanoTime() - start, monitorFailure[0], null);
+            Trajectory traj = new Trajectory(Trajectory.Mode.PROPAGATOR, h.dim(), List.of(), List.of(), List.of());
+            return new Evolution(s, st, Trajectory.Mode.PROPAGATOR, h.dim(), null, null, traj, stats, Double.NaN,
+                    null);
+        }
+        long nanos = System.nanoTime() - start;
+        Status.Kind kind = cr.cancelled ? Status.Kind.CANCELLED
+                : cr.failure != null || cr.propagator == null ? Status.Kind.FAILED : Status.Kind.SUCCESS;
+        double reached = cr.times.length > 0 ? cr.times[cr.times.length - 1] : t0;
+        String msg = cr.cancelled ? "cancelled by the progress listener at t = " + reached
+                : cr.failure != null ? cr.failure : cr.propagator == null ? "no propagator returned" : "";
+        Status st = status(kind, msg, monitorFailure[0], null, kind == Status.Kind.SUCCESS ? t1 : reached);
+        Stats stats = new Stats(cr.steps, 0, cr.evaluations, 0, 0, cr.charts, nanos, monitorFailure[0], null);
+        Coordinates coords = new Coordinates(cr.times, cr.coordinates);
+        Trajectory.Mode mode = psi != null ? Trajectory.Mode.STATE : Trajectory.Mode.PROPAGATOR;
+        List<Double> times = new ArrayList<>();
+        List<double[]> re = new ArrayList<>(), im = new ArrayList<>();
+        double[] fr = null, fi = null;
+        int dim = h.dim();
+        if (cr.propagator != null) {
+            Operator u = cr.propagator;
+            dim = u.dim();
+            if (psi != null) {
+                StateVector out = psi.apply(u);
+                fr = new double[dim];
+                fi = new double[dim];
+                out.copyTo(fr, fi);
+            } else {
+                fr = u.reArray();
+                fi = u.imArray();
+            }
+            times.add(kind == Status.Kind.SUCCESS ? t1 : reached);
+            re.add(fr);
+            im.add(fi);
+        }
+        Trajectory traj = new Trajectory(mode, dim, times, re, im);
+        return new Evolution(s, st, mode, dim, fr, fi, traj, stats, Double.NaN, coords);
+    }
+
+    @Override
+    public String toString() {
+        return "Evolve[" + (h != null ? h : l) + ", over [" + t0 + ", " + t1 + "], "
+                + (scheme == null ? "default scheme" : scheme.name()) + ", "
+                + (steps > 0 ? steps + " steps" : "tolerance " + (Double.isNaN(tolerance) ? DEFAULT_TOLERANCE
+                : tolerance)) + "]";
+    }
+}

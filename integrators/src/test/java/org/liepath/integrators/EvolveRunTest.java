@@ -1,0 +1,322 @@
+package org.liepath.integrators;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.liepath.core.Drive;
+import org.liepath.core.Hamiltonian;
+import org.liepath.core.Lindbladian;
+import org.liepath.core.Operator;
+import org.liepath.core.Pauli;
+import org.liepath.core.Spin;
+import org.liepath.core.StateVector;
+import org.liepath.core.Superoperator;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicInteger;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** Statuses, modes, sampling, listeners and thread safety of Evolve runs. */
+class EvolveRunTest {
+    static List<Scheme> schemes() {
+        return Fixtures.steppable();
+    }
+
+    /** exp(−iθ n·σ) = cos θ I − i sin θ (n·σ) for a unit vector n (textbook identity, e.g. M.A. Nielsen, I.L.
+     *  Chuang, Quantum Computation and Quantum Information, CUP 2000, exercise 4.2; from memory). */
+    static Operator pauliExp(double bx, double bz, double t) {
+        double b = Math.hypot(bx, bz), th = b * t;
+        Operator ns = Pauli.string("X").scale(bx / b).plus(Pauli.string("Z").scale(bz / b));
+        return Operator.identity(2).scale(Math.cos(th)).minus(ns.timesI().scale(Math.sin(th)));
+    }
+
+    /** Two constant segments: U = exp(−i 0.6 H2) exp(−i 0.4 H1), from the closed form of qubit exponentials. */
+    @Test
+    void piecewiseExactMatchesClosedForm() {
+        Operator exact = pauliExp(-0.4, 0.6, 0.6).times(pauliExp(0.9, 0.6, 0.4));
+        Evolution ev = Evolve.of(Fixtures.piecewiseQubit()).over(0, 1).scheme(Scheme.piecewiseExact()).run();
+        assertEquals(0.0, ev.propagator().distance(exact), 1e-15 * 8);
+        assertEquals(2, ev.stats().acceptedSteps(), "one step per segment");
+        assertEquals(2, ev.stats().exponentials());
+        assertEquals(0.0, ev.errorEstimate());
+    }
+
+    /**
+     * The tolerance is honoured: against a converged run (Magnus 8, 4000 fixed steps: error ~ C h^8 far below 1e-13),
+     * the global error of an adaptive run at tol is within ten times its own error estimate (plus rounding), and the
+     * estimate is not absurdly pessimistic (below 1000·tol for a run of ~100 steps).
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("schemes")
+    void adaptiveRunsMeetTheirEstimate(Scheme s) {
+        Hamiltonian h = Fixtures.drivenFour(23);
+        Operator exact = Evolve.of(h).over(0, 2).scheme(Scheme.magnus8()).steps(4000).run().propagator();
+        double tol = 1e-9;
+        Evolution ev = Evolve.of(h).over(0, 2).scheme(s).tolerance(tol).run();
+        assertTrue(ev.status().isSuccess(), ev.status().toString());
+        double err = ev.propagator().distance(exact) / 2; // relative Frobenius (‖U‖_F = 2)
+        assertTrue(err <= 10 * ev.errorEstimate() + 1e-12, "error " + err + " vs estimate " + ev.errorEstimate());
+        assertTrue(ev.errorEstimate() < 1000 * tol, "estimate " + ev.errorEstimate());
+    }
+
+    /**
+     * A generator that commutes with itself, H = cos(t) X: U(t) = exp(−i sin(t) X) = cos(sin t) I − i sin(sin t) X.
+     * Embedded partners on shared nodes are blind to the quadrature error here; the adaptive run must still meet
+     * its tolerance (global error ≲ steps × tol).
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("schemes")
+    void selfCommutingDriveMeetsTheTolerance(Scheme s) {
+        Hamiltonian h = Hamiltonian.builder(2).term(Pauli.string("X"), Drive.cosine(1.0, 1.0)).build();
+        double t = 10, phi = Math.sin(t);
+        Operator exact = Operator.identity(2).scale(Math.cos(phi)).minus(Pauli.string("X").timesI()
+                .scale(Math.sin(phi)));
+        Evolution ev = Evolve.of(h).over(0, t).scheme(s).tolerance(1e-9).run();
+        assertTrue(ev.propagator().distance(exact) < 1e-9 * Math.max(10, ev.stats().acceptedSteps()),
+                "error " + ev.propagator().distance(exact) + " in " + ev.stats().acceptedSteps() + " steps");
+    }
+
+    @Test
+    void driveFailureEndsTheRunWithItsNameAndTime() {
+        Drive bad = new Drive() {
+            @Override
+            public double at(double t) {
+                if (t > 0.5) {
+                    throw new ArithmeticException("boom");
+                }
+                return 1.0;
+            }
+
+            @Override
+            public String name() {
+                return "fragile";
+            }
+        };
+        Hamiltonian h = Hamiltonian.builder(2).term(0.5, Pauli.string("Z")).term(Pauli.string("X"), bad).build();
+        for (Evolve e : new Evolve[]{Evolve.of(h).over(0, 1), Evolve.of(h).over(0, 1).steps(20),
+            Evolve.of(h).over(0, 1).scheme(Scheme.reference())}) {
+            Evolution ev = e.run();
+            assertEquals(Status.Kind.DRIVE_FAILED, ev.status().kind());
+            assertTrue(ev.status().message().contains("fragile") && ev.status().message().contains("t = "),
+                    ev.status().message());
+            IllegalStateException ex = assertThrows(IllegalStateException.class, ev::propagator);
+            assertTrue(ex.getMessage().contains("DRIVE_FAILED"), ex.getMessage());
+            Trajectory tr = ev.trajectory();
+            double reached = tr.time(tr.size() - 1);
+            assertTrue(reached <= 0.5 && reached == ev.status().time(), "reached " + reached);
+            assertTrue(Fixtures.unitarityDefect(tr.propagator(tr.size() - 1)) < 1e-6);
+        }
+    }
+
+    @Test
+    void nonFiniteDriveValueIsADriveFailure() {
+        Hamiltonian h = Hamiltonian.builder(2).term(Pauli.string("X"), t -> t < 0.3 ? 1 : Double.NaN).build();
+        Evolution ev = Evolve.of(h).over(0, 1).run();
+        assertEquals(Status.Kind.DRIVE_FAILED, ev.status().kind());
+        assertTrue(ev.status().message().contains("NaN"), ev.status().message());
+    }
+
+    @Test
+    void listenerCancels() {
+        AtomicInteger calls = new AtomicInteger();
+        Evolution ev = Evolve.of(Fixtures.drivenQubit()).over(0, 5).steps(50)
+                .monitor((f, c) -> calls.incrementAndGet() < 3).run();
+        assertEquals(Status.Kind.CANCELLED, ev.status().kind());
+        assertEquals(3, calls.get());
+        assertEquals(3, ev.stats().acceptedSteps());
+        assertEquals(0.3, ev.status().time(), 1e-15);
+    }
+
+    @Test
+    void throwingListenerDoesNotCorruptTheResult() {
+        AtomicInteger calls = new AtomicInteger();
+        Evolve e = Evolve.of(Fixtures.drivenQubit()).over(0, 2);
+        Evolution quiet = e.run();
+        Evolution ev = e.monitor((f, c) -> {
+            calls.incrementAndGet();
+            throw new IllegalStateException("listener bug");
+        }).observe((t, dt, err) -> {
+            throw new UnsupportedOperationException("observer bug");
+        }).run();
+        assertTrue(ev.status().isSuccess());
+        assertEquals(1, calls.get(), "a listener that threw is not called again");
+        assertTrue(ev.stats().monitorFailure().contains("listener bug"));
+        assertTrue(ev.stats().observerFailure().contains("observer bug"));
+        assertTrue(ev.status().message().contains("listener bug"));
+        assertArrayEquals(quiet.propagator().reArray(), ev.propagator().reArray());
+        assertArrayEquals(quiet.propagator().imArray(), ev.propagator().imArray());
+    }
+
+    @Test
+    void observerSeesEveryAcceptedStep() {
+        List<Double> times = new ArrayList<>();
+        Evolution ev = Evolve.of(Fixtures.drivenFour(2)).over(0, 1.5).tolerance(1e-7).sampleEveryStep()
+                .observe((t, dt, err) -> times.add(t)).run();
+        assertEquals(ev.stats().acceptedSteps(), times.size());
+        assertEquals(times.size() + 1, ev.trajectory().size());
+        assertEquals(1.5, times.get(times.size() - 1), 0.0);
+        // steps land exactly on the window's breakpoints 0.3 and 0.8
+        assertTrue(times.contains(0.3) && times.contains(0.8), times.toString());
+    }
+
+    @Test
+    void stepLimit() {
+        Evolution ev = Evolve.of(Fixtures.drivenFour(4)).over(0, 10).tolerance(1e-12).maxSteps(5).run();
+        assertEquals(Status.Kind.STEP_LIMIT, ev.status().kind());
+        assertTrue(ev.status().message().contains("5"), ev.status().message());
+        assertThrows(IllegalStateException.class, ev::propagator);
+    }
+
+    @Test
+    void samplesAreHitExactlyAndAgreeWithSeparateRuns() {
+        Hamiltonian h = Fixtures.drivenFour(8);
+        double tol = 1e-11;
+        Evolution ev = Evolve.of(h).over(0, 2).tolerance(tol).sampleAt(1.25, 0.5, 2.0, 0.0).run();
+        Trajectory tr = ev.trajectory();
+        assertArrayEquals(new double[]{0.0, 0.5, 1.25, 2.0}, tr.times());
+        Operator half = Evolve.of(h).over(0, 0.5).tolerance(tol).run().propagator();
+        assertEquals(0.0, tr.propagator(1).distance(half), 1e-8);
+        assertEquals(0.0, tr.propagator(0).distance(Operator.identity(4)), 0.0);
+        assertThrows(IllegalStateException.class, () -> tr.state(0));
+        // backward runs sample in the order reached
+        Trajectory back = Evolve.of(h).over(2, 0).steps(8).sampleAt(0.5, 1.25).run().trajectory();
+        assertArrayEquals(new double[]{2.0, 1.25, 0.5, 0.0}, back.times());
+    }
+
+    @Test
+    void stateModeEqualsPropagatorTimesState() {
+        Hamiltonian h = Fixtures.drivenFour(12);
+        StateVector psi = StateVector.basis(4, 2);
+        Evolve e = Evolve.of(h).over(0, 1.7).steps(60);
+        StateVector out = e.state(psi).run().state();
+        StateVector viaU = psi.apply(e.run().propagator());
+        assertEquals(0.0, out.distance(viaU), 1e-14);
+        // 180 unitary factors applied to a vector, each off unitarity by a few ulps
+        assertEquals(1.0, out.norm(), 1e-13);
+        assertThrows(IllegalStateException.class, () -> e.state(psi).run().propagator());
+    }
+
+    /**
+     * Large vector states use the Krylov action of each exponential (accuracy 1e-14 per exponential): the state run
+     * agrees with the dense propagator applied to ψ to ~ (number of exponentials) × 1e-14.
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("schemes")
+    void largeStatesUseKrylovAndAgreeWithTheDensePropagator(Scheme s) {
+        int n = 48; // the smallest dimension that takes the Krylov route
+        java.util.Random r = new java.util.Random(77);
+        Hamiltonian h = Hamiltonian.builder(n).term(0.1, Operator.real(Fixtures.randomSymmetric(r, n)))
+                .term(Operator.real(Fixtures.randomSymmetric(r, n)), Drive.cosine(0.05, 2.0)).build();
+        StateVector psi = StateVector.of(r.doubles(n).toArray(), r.doubles(n).toArray()).normalized();
+        Evolve e = Evolve.of(h).over(0, 1).scheme(s).steps(4);
+        Evolution ev = e.state(psi).run();
+        StateVector dense = psi.apply(e.run().propagator());
+        long exps = ev.stats().exponentials();
+        assertEquals(0.0, ev.state().distance(dense), 1e-14 * exps + 1e-13);
+        assertEquals(1.0, ev.state().norm(), 1e-14 * exps + 1e-13);
+    }
+
+    /** Many threads evolving the same configuration give identical bits. */
+    @Test
+    void parallelRunsEqualSequentialOnes() throws Exception {
+        Evolve e = Evolve.of(Fixtures.drivenFour(31)).over(0, 3).tolerance(1e-9);
+        Operator seq = e.run().propagator();
+        ExecutorService pool = Executors.newFixedThreadPool(4);
+        try {
+            List<Future<Operator>> fs = new ArrayList<>();
+            for (int k = 0; k < 8; k++) {
+                fs.add(pool.submit(() -> e.run().propagator()));
+            }
+            for (Future<Operator> f : fs) {
+                assertEquals(seq, f.get());
+            }
+        } finally {
+            pool.shutdown();
+        }
+    }
+
+    /**
+     * Amplitude damping with a Rabi drive switched off (H = 0 part time independent): populations and coherence
+     * follow the closed form ρ11(t) = e^{−Γt} ρ11(0), ρ01(t) = e^{−Γt/2} ρ01(0) (H.-P. Breuer, F. Petruccione, The
+     * Theory of Open Quantum Systems, OUP 2002, §3.4 — from memory), computed with one exponential.
+     */
+    @Test
+    void amplitudeDampingClosedForm() {
+        double gamma = 0.7, t = 1.9;
+        Hamiltonian zero = Hamiltonian.builder(2).term(0.0, Pauli.string("Z")).build();
+        Lindbladian l = Lindbladian.builder(zero).jump(gamma, Operator.unit(2, 0, 1)).build();
+        Operator rho0 = Operator.of(new double[][]{{0.3, 0.2}, {0.2, 0.7}}, new double[][]{{0, 0.1}, {-0.1, 0}});
+        Evolution ev = Evolve.of(l).over(0, t).density(rho0).run();
+        Operator rho = ev.density();
+        assertEquals(1, ev.stats().exponentials(), "a time-independent generator takes one exponential");
+        assertEquals(Math.exp(-gamma * t) * 0.7, rho.re(1, 1), 1e-14);
+        assertEquals(0.3 + (1 - Math.exp(-gamma * t)) * 0.7, rho.re(0, 0), 1e-14);
+        assertEquals(Math.exp(-gamma * t / 2) * 0.2, rho.re(0, 1), 1e-14);
+        assertEquals(Math.exp(-gamma * t / 2) * 0.1, rho.im(0, 1), 1e-14);
+        assertTrue(ev.minEigenvalue() > 0);
+    }
+
+    /** Driven open system: trace preserved to rounding, channel and density modes agree, positivity holds. */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("schemes")
+    void drivenOpenSystem(Scheme s) {
+        Lindbladian l = Lindbladian.builder(Fixtures.drivenQubit()).jump(0.3, Operator.unit(2, 0, 1))
+                .jump(0.1, Pauli.string("Z")).build();
+        Operator rho0 = Operator.unit(2, 1, 1);
+        Evolution dens = Evolve.of(l).over(0, 3).scheme(s).tolerance(1e-10).density(rho0).run();
+        Evolution chan = Evolve.of(l).over(0, 3).scheme(s).tolerance(1e-10).run();
+        assertTrue(dens.status().isSuccess() && chan.status().isSuccess());
+        // each step's generator annihilates the trace exactly in exact arithmetic: only rounding remains
+        assertEquals(1.0, dens.density().trace().getReal(), 1e-13);
+        Superoperator map = chan.channel();
+        assertTrue(map.traceDefect() < 1e-13, "trace defect " + map.traceDefect());
+        assertEquals(0.0, map.apply(rho0).distance(dens.density()), 1e-8);
+        assertTrue(dens.minEigenvalue() > -1e-12);
+        assertTrue(chan.minEigenvalue() > -1e-9, "Choi minimum " + chan.minEigenvalue());
+        assertThrows(IllegalStateException.class, dens::propagator);
+        assertThrows(IllegalStateException.class, dens::coordinates);
+    }
+
+    /**
+     * Wei–Norman runs are routed to the chart's coordinate integrator and wrapped: the propagator agrees with a
+     * Magnus 6 run at the tolerance, coordinates are available, and misuse is refused.
+     */
+    @Test
+    void weiNormanRunsAreRoutedToTheChart() {
+        Hamiltonian h = Fixtures.drivenQubit();
+        WeiNorman chart = WeiNorman.of(List.of(Spin.of(0.5).plus(), Spin.of(0.5).z(), Spin.of(0.5).minus()));
+        Evolution wn = Evolve.of(h).over(0, 2).scheme(Scheme.weiNorman(chart)).tolerance(1e-11).sampleAt(1.0).run();
+        assertTrue(wn.status().isSuccess(), wn.status().toString());
+        Operator ref = Evolve.of(h).over(0, 2).scheme(Scheme.magnus6()).tolerance(1e-12).run().propagator();
+        assertEquals(0.0, wn.propagator().distance(ref), 1e-8);
+        assertEquals(3, wn.coordinates().last().length);
+        assertTrue(wn.stats().charts() >= 1);
+        assertTrue(Double.isNaN(wn.errorEstimate()));
+        StateVector psi = Evolve.of(h).over(0, 2).scheme(Scheme.weiNorman(chart)).tolerance(1e-11)
+                .state(StateVector.basis(2, 0)).run().state();
+        assertEquals(0.0, psi.distance(StateVector.basis(2, 0).apply(ref)), 1e-8);
+        assertThrows(IllegalStateException.class, () -> Evolve.of(h).over(0, 1).run().coordinates());
+        Lindbladian l = Lindbladian.builder(h).jump(0.1, Pauli.string("Z")).build();
+        EvolveInputTest.refused(org.liepath.core.InvalidInputException.Reason.UNSUPPORTED, "scheme",
+                "Hamiltonians only", () -> Evolve.of(l).over(0, 1).scheme(Scheme.weiNorman(chart)).run());
+        EvolveInputTest.refused(org.liepath.core.InvalidInputException.Reason.UNSUPPORTED, "steps",
+                "10 fixed steps", () -> Evolve.of(h).over(0, 1).scheme(Scheme.weiNorman(chart)).steps(10).run());
+    }
+
+    @Test
+    void statsPrintAsATable() {
+        Evolution ev = Evolve.of(Fixtures.drivenQubit()).over(0, 1).run();
+        String table = ev.stats().toString();
+        assertTrue(table.contains("accepted steps") && table.contains("exponentials") && table.contains("wall time"),
+                table);
+        assertTrue(ev.toString().contains("CF4:3Opt"));
+    }
+}
