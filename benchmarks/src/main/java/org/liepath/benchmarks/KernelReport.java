@@ -26,7 +26,8 @@ import java.util.TreeMap;
  * /proc/cpuinfo) times the clock; on these machines a FMA loop measured ≈ 47 GFLOP/s per core, the default of the
  * system property {@code liepath.peakGflops}.
  *
- * <p>Run: {@code java -cp benchmarks/target/benchmarks.jar org.liepath.benchmarks.KernelReport [regex]} (short
+ * <p>Run: {@code java -cp benchmarks/target/benchmarks.jar org.liepath.benchmarks.KernelReport [regex [sizes]]}
+ * (sizes comma-separated, default 2,4,8,16,64,256; short
  * settings: 1 fork, 3 warm-up and 5 measured iterations of 1 s). The machine is shared, so the numbers are rough.
  */
 public final class KernelReport {
@@ -35,8 +36,13 @@ public final class KernelReport {
 
     public static void main(String[] args) throws RunnerException {
         String include = args.length > 0 ? args[0] : "org.liepath.benchmarks.(MatMul|Expm|HermitianExp)Benchmark";
-        Options opt = new OptionsBuilder().include(include).forks(1).warmupIterations(3).measurementIterations(5)
-                .warmupTime(TimeValue.seconds(1)).measurementTime(TimeValue.seconds(1)).build();
+        OptionsBuilder ob = new OptionsBuilder();
+        ob.include(include).forks(1).warmupIterations(3).measurementIterations(5)
+                .warmupTime(TimeValue.seconds(1)).measurementTime(TimeValue.seconds(1));
+        if (args.length > 1) {
+            ob.param("n", args[1].split(","));
+        }
+        Options opt = ob.build();
         Collection<RunResult> results = new Runner(opt).run();
         // benchmark → n → ns/op
         Map<String, Map<Integer, Double>> ns = new TreeMap<>();

@@ -22,7 +22,9 @@ import java.util.Locale;
  *
  * <p>Cost: about (m + 1) matrix–vector products (8n² flops each for a dense n×n matrix) per sub-step, plus the
  * orthogonalisation (≈ 4m²n flops) and small m×m exponentials; the number of sub-steps grows like |t|·‖A‖/m.
- * Dimensions of a few thousand take well under a second per sub-step. For repeated calls in a hot loop use the
+ * The dense product is memory-bound (it streams the 16n² bytes of the matrix): at n = 2000, a run with
+ * t‖H‖ ≈ 40 and tol = 1e-10 (5 sub-steps, 155 products) took 14–18 s on a shared machine under a load of about ten
+ * runnable threads per core, which suggests 1–2 s on an idle core. For repeated calls in a hot loop use the
  * zero-allocation workspace {@code org.liepath.core.internal.KrylovWorkspace} (same algorithm, same bits).
  *
  * <p>Thread-safety: stateless; every call uses its own workspace. Results are immutable.

@@ -24,30 +24,35 @@ public final class Dense {
             mul4(ar, ai, br, bi, cr, ci);
             return;
         }
-        for (int i = 0; i < n; i++) {
-            int in = i * n;
-            java.util.Arrays.fill(cr, in, in + n, 0.0);
-            java.util.Arrays.fill(ci, in, in + n, 0.0);
-            int k = 0;
-            for (; k + 1 < n; k += 2) {
-                double xr = ar[in + k], xi = ai[in + k], yr = ar[in + k + 1], yi = ai[in + k + 1];
-                if (xr == 0 && xi == 0 && yr == 0 && yi == 0) {
-                    continue; // sparse operands (Kronecker products, superoperators) skip whole row pairs
+        java.util.Arrays.fill(cr, 0, n * n, 0.0);
+        java.util.Arrays.fill(ci, 0, n * n, 0.0);
+        // k is blocked so that the panel of b rows in use (both planes) stays within ~128 KB (a Level-2 cache)
+        int kb = Math.max(2, (8192 / n) & ~1);
+        for (int k0 = 0; k0 < n; k0 += kb) {
+            int k1 = Math.min(n, k0 + kb);
+            for (int i = 0; i < n; i++) {
+                int in = i * n;
+                int k = k0;
+                for (; k + 1 < k1; k += 2) {
+                    double xr = ar[in + k], xi = ai[in + k], yr = ar[in + k + 1], yi = ai[in + k + 1];
+                    if (xr == 0 && xi == 0 && yr == 0 && yi == 0) {
+                        continue; // sparse operands (Kronecker products, superoperators) skip whole row pairs
+                    }
+                    int kn = k * n, k1n = kn + n;
+                    for (int j = 0; j < n; j++) {
+                        double pr = br[kn + j], pim = bi[kn + j], qr = br[k1n + j], qi = bi[k1n + j];
+                        cr[in + j] += xr * pr - xi * pim + yr * qr - yi * qi;
+                        ci[in + j] += xr * pim + xi * pr + yr * qi + yi * qr;
+                    }
                 }
-                int kn = k * n, k1n = kn + n;
-                for (int j = 0; j < n; j++) {
-                    double pr = br[kn + j], pim = bi[kn + j], qr = br[k1n + j], qi = bi[k1n + j];
-                    cr[in + j] += xr * pr - xi * pim + yr * qr - yi * qi;
-                    ci[in + j] += xr * pim + xi * pr + yr * qi + yi * qr;
-                }
-            }
-            if (k < n) {
-                double xr = ar[in + k], xi = ai[in + k];
-                int kn = k * n;
-                for (int j = 0; j < n; j++) {
-                    double pr = br[kn + j], pim = bi[kn + j];
-                    cr[in + j] += xr * pr - xi * pim;
-                    ci[in + j] += xr * pim + xi * pr;
+                if (k < k1) {
+                    double xr = ar[in + k], xi = ai[in + k];
+                    int kn = k * n;
+                    for (int j = 0; j < n; j++) {
+                        double pr = br[kn + j], pim = bi[kn + j];
+                        cr[in + j] += xr * pr - xi * pim;
+                        ci[in + j] += xr * pim + xi * pr;
+                    }
                 }
             }
         }
@@ -97,16 +102,27 @@ public final class Dense {
 
     /** y = a·x for a vector x (planar). Outputs must not alias inputs. */
     public static void mulVec(int n, double[] ar, double[] ai, double[] xr, double[] xi, double[] yr, double[] yi) {
+        // two independent partial sums per component halve the floating-point dependency chain, which otherwise
+        // limits this memory-streaming loop (Krylov propagation spends its time here)
         for (int i = 0; i < n; i++) {
-            double sr = 0, si = 0;
+            double sr = 0, si = 0, tr = 0, ti = 0;
             int in = i * n;
-            for (int k = 0; k < n; k++) {
+            int k = 0;
+            for (; k + 1 < n; k += 2) {
+                double pr = ar[in + k], pi = ai[in + k], qr = xr[k], qi = xi[k];
+                double pr1 = ar[in + k + 1], pi1 = ai[in + k + 1], qr1 = xr[k + 1], qi1 = xi[k + 1];
+                sr += pr * qr - pi * qi;
+                si += pr * qi + pi * qr;
+                tr += pr1 * qr1 - pi1 * qi1;
+                ti += pr1 * qi1 + pi1 * qr1;
+            }
+            if (k < n) {
                 double pr = ar[in + k], pi = ai[in + k], qr = xr[k], qi = xi[k];
                 sr += pr * qr - pi * qi;
                 si += pr * qi + pi * qr;
             }
-            yr[i] = sr;
-            yi[i] = si;
+            yr[i] = sr + tr;
+            yi[i] = si + ti;
         }
     }
 

@@ -75,6 +75,28 @@ class DenseTest {
     }
 
     @org.junit.jupiter.api.Test
+    void blockedProductMatchesDefinition() {
+        // n = 131: the k loop runs in blocks of 62 rows with an odd remainder
+        Random r = new Random(131);
+        int n = 131;
+        double[] ar = gauss(r, n * n), ai = gauss(r, n * n), br = gauss(r, n * n), bi = gauss(r, n * n);
+        double[] cr = new double[n * n], ci = new double[n * n];
+        Dense.mul(n, ar, ai, br, bi, cr, ci);
+        double err = 0;
+        for (int i = 0; i < n; i += 13) {
+            for (int j = 0; j < n; j++) {
+                double sr = 0, si = 0;
+                for (int k = 0; k < n; k++) {
+                    sr += ar[i * n + k] * br[k * n + j] - ai[i * n + k] * bi[k * n + j];
+                    si += ar[i * n + k] * bi[k * n + j] + ai[i * n + k] * br[k * n + j];
+                }
+                err = Math.max(err, Math.abs(sr - cr[i * n + j]) + Math.abs(si - ci[i * n + j]));
+            }
+        }
+        assertTrue(err <= 8 * n * n * U, "error " + err);
+    }
+
+    @org.junit.jupiter.api.Test
     void norm1DoesNotOverflowForHugeFiniteEntries() {
         // |3e200 + 4e200 i| = 5e200 (the modulus squared would overflow)
         double norm = Dense.norm1(2, new double[]{3e200, 0, 0, 1}, new double[]{4e200, 0, 0, 0});

@@ -373,6 +373,26 @@ class ExpmTest {
     }
 
     @Test
+    void largeDimensionsThroughEjmlProductsAgreeWithEigen() {
+        // from n = Expm.EJML_FROM the products run through EJML; check that path against the independent
+        // eigendecomposition route for A = −itH (normal: both accurate to ≲ (n + ‖tH‖) u; tolerance 20 times that)
+        Random r = new Random(64);
+        int n = Expm.EJML_FROM + 6;
+        org.liepath.core.Operator h = Seeds.randomHermitian(r, n);
+        double t = 0.7;
+        double[] hr = h.reArray(), hi = h.imArray(), ar = new double[n * n], ai = new double[n * n];
+        for (int k = 0; k < n * n; k++) {
+            ar[k] = t * hi[k];
+            ai[k] = -t * hr[k];
+        }
+        double[][] pade = exp(n, ar, ai);
+        double[] er = new double[n * n], ei = new double[n * n];
+        new HermitianExp(n).compute(hr, hi, t, er, ei);
+        double d = rel(pade[0], pade[1], er, ei);
+        assertTrue(d <= 20 * (n + t * h.norm()) * U, "relative difference " + d);
+    }
+
+    @Test
     void workspaceCanBeReusedAndOutputsMayAliasInputs() {
         Random r = new Random(7);
         int n = 6;
