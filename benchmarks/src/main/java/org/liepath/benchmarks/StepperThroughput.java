@@ -23,7 +23,7 @@ import java.util.concurrent.TimeUnit;
  * Throughput of the zero-allocation tier: one {@code Stepper.advance(t, dt, u)} on a propagator of a driven 2-level
  * (one qubit, three terms) or 4-level (two qubits, five terms) Hamiltonian, in ns per step. The trial set-up prints
  * the model flop count of one step and the time it would take at this machine's measured FMA peak of ~47 GFLOP/s per
- * core (DESIGN.md build facts), so the JMH score can be read against it.
+ * core (measured with an FMA loop on these machines), so the JMH score can be read against it.
  *
  * <p>Flop model (real flops; rough): a complex n×n product costs 8n³; assembling one exponent costs 4n² per term and
  * node; an exponential costs 40 flops for n = 2 (closed form) and, for n ≥ 3, (π_m + 4/3) products for the Padé

@@ -94,7 +94,7 @@ class KrylovTest {
 
     @Test
     void lanczosAtDimension500() {
-        // METHODS checklist: Krylov against dense expm for n ≤ 500 (dense reference: eigendecomposition)
+        // Krylov against dense expm for n ≤ 500 (common practice for validating Krylov actions) (dense reference: eigendecomposition)
         Random r = new Random(500);
         int n = 500;
         Operator h = wigner(r, n);

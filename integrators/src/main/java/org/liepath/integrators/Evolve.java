@@ -436,12 +436,38 @@ public final class Evolve {
                 fr = u.reArray();
                 fi = u.imArray();
             }
+        }
+        // the trajectory: t0, every sample time the chart recorded (re-anchoring already composed in), the end
+        addSample(times, re, im, t0, Operator.identity(dim), psi);
+        if (cr.propagators != null && cr.propagators.size() == cr.times.length) {
+            for (int k = 0; k < cr.times.length; k++) {
+                if (cr.propagators.get(k) != null && cr.times[k] != t0 && !(k == cr.times.length - 1 && fr != null)) {
+                    addSample(times, re, im, cr.times[k], cr.propagators.get(k), psi);
+                }
+            }
+        }
+        if (fr != null) {
             times.add(kind == Status.Kind.SUCCESS ? t1 : reached);
             re.add(fr);
             im.add(fi);
         }
         Trajectory traj = new Trajectory(mode, dim, times, re, im);
         return new Evolution(s, st, mode, dim, fr, fi, traj, stats, Double.NaN, coords);
+    }
+
+    private static void addSample(List<Double> times, List<double[]> re, List<double[]> im, double t, Operator u,
+                                  StateVector psi) {
+        times.add(t);
+        if (psi != null) {
+            StateVector out = psi.apply(u);
+            double[] r = new double[out.dim()], i = new double[out.dim()];
+            out.copyTo(r, i);
+            re.add(r);
+            im.add(i);
+        } else {
+            re.add(u.reArray());
+            im.add(u.imArray());
+        }
     }
 
     @Override
