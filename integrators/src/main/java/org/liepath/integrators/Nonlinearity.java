@@ -9,6 +9,8 @@ package org.liepath.integrators;
  * block is a quadrature, counted as {@link #LINEAR}. The classification of a whole system is the worst of its
  * equations. For the ordering (J+, Jz, J−) of su(2) the system is {@link #RICCATI}: one scalar Riccati equation and two
  * quadratures (J. Wei, E. Norman, J. Math. Phys. 4 (1963) 575).
+ *
+ * <p>Enum constants: immutable and thread-safe.
  */
 public enum Nonlinearity {
     /** Linear in the coupled coordinates (or a quadrature). */

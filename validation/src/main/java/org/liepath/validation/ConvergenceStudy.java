@@ -43,13 +43,13 @@ public final class ConvergenceStudy {
     /** Most halvings a study may do. */
     public static final int MAX_LEVELS = 20;
 
-    /** One run of the study. */
+    /** One run of the study. Immutable and thread-safe. */
     public record Point(int steps, double stepSize, double error, long evaluations, double seconds) {
     }
 
     /**
      * What a run returns: the result (null if the run failed: the point is then unusable) and, where known, the
-     * number of generator evaluations (−1 if unknown).
+     * number of generator evaluations (−1 if unknown). Immutable (operators are immutable) and thread-safe.
      */
     public record Outcome(Operator result, long evaluations) {
     }

@@ -37,7 +37,7 @@ public final class CrossCheck {
     /** Tolerance of the reference run: two orders of magnitude above rounding, far below the schemes' errors. */
     public static final double DEFAULT_REFERENCE_TOLERANCE = 1e-13;
 
-    /** One row of the table. */
+    /** One row of the table. Immutable and thread-safe. */
     public record Row(String scheme, String mode, long steps, long evaluations, double error, double structureError,
                       double seconds, String status) {
     }

@@ -42,6 +42,9 @@ import java.util.function.Consumer;
  * <p>Run from the repository root after building the all-in-one jar:
  * {@code java -jar validation/target/liepath-all.jar [report-folder]} (default {@value #DEFAULT_FOLDER}).
  * Takes a few seconds. {@link #run(Path, Consumer)} is the same without a console.
+ *
+ * <p>Thread-safety: the class holds no mutable state; runs on several threads at once are safe as long as each writes
+ * to its own folder.
  */
 public final class Demo {
     /** Default report folder, relative to the working directory. */
@@ -57,7 +60,10 @@ public final class Demo {
     private Demo() {
     }
 
-    /** What {@link #run} computed: the written report and the headline figures by name (as written in the summary). */
+    /**
+     * What {@link #run} computed: the written report and the headline figures by name (as written in the summary).
+     * Immutable (the map is an unmodifiable copy) and thread-safe.
+     */
     public record Outcome(Report report, Map<String, String> figures) {
     }
 

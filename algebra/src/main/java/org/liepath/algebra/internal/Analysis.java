@@ -13,6 +13,8 @@ import java.util.Random;
  * returns coordinate vectors, so no matrix bracket is recomputed. All null spaces and spans are taken from the
  * eigen-decomposition of a positive semidefinite Gram matrix (Commons Math, symmetric QL), with "zero" meaning at or
  * below {@link #REL_ZERO} times the largest eigenvalue. Not part of the public API.
+ *
+ * <p>Stateless static helpers: thread-safe.
  */
 public final class Analysis {
     private Analysis() {

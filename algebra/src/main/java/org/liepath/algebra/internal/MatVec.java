@@ -8,6 +8,8 @@ import org.liepath.core.Operator;
  * strings, matrix units and their closures) carry a support list, and brackets and inner products then cost
  * O(nnz·n) and O(nnz) instead of O(n³) and O(n²). Not part of the public API; no method keeps references to its
  * arguments.
+ *
+ * <p>Stateless static helpers: thread-safe.
  */
 public final class MatVec {
     private MatVec() {

@@ -6,6 +6,8 @@ package org.liepath.algebra.internal;
  * su(4) (= so(6)); so(4) is not simple and comes out as su(2) ⊕ su(2). sp(2m) is the compact symplectic algebra of
  * 2m×2m matrices (dimension m(2m+1), rank m). Exceptional algebras are named g2, f4, e6, e7, e8 when dimension and
  * rank (and, for e6 against so(13)/sp(12), equal root lengths) identify them. Not part of the public API.
+ *
+ * <p>Stateless static helpers: thread-safe.
  */
 public final class Names {
     private Names() {

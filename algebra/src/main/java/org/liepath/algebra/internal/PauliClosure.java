@@ -29,6 +29,8 @@ import java.util.concurrent.CancellationException;
  * 1962, §I.2: by induction with the Jacobi identity). For a span of dimension d from k generators this costs d·k
  * brackets instead of d²/2. Generators that depend linearly on earlier ones are dropped first, which changes
  * nothing since ad is linear. Not part of the public API.
+ *
+ * <p>Stateless static helpers: thread-safe.
  */
 public final class PauliClosure {
     /** A reduced bracket whose largest coefficient is below this fraction of its unreduced size is taken as zero. */

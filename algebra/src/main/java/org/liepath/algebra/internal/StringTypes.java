@@ -33,6 +33,8 @@ import java.util.List;
  *   D_k (k ≥ 4) with 2k(k−1), E6 with 72, E7 with 126, E8 with 240; two lengths of squared ratio 2: B_k with 2k²
  *   roots of which 2k short, C_k (k ≥ 3) with 2k² roots of which 2k(k−1) short, F4 with 48; ratio 3: G2 with 12.</li>
  * </ol>
+ *
+ * <p>Stateless static helpers: thread-safe.
  */
 public final class StringTypes {
     /** Above this many roots (dimension minus rank) the root system is not built. */

@@ -18,6 +18,8 @@ import java.util.List;
  * </pre>
  * It runs in one pass over the text, so it cannot hang; every refusal is a SYNTAX (or NOT_FINITE for a coefficient
  * that overflows) {@link InvalidInputException} naming the 0-based position. Not part of the public API.
+ *
+ * <p>Thread-safe: {@link #parse} uses a fresh scanner per call; scanners are never shared.
  */
 public final class SumSyntax {
     /** One parsed term: its letters, its signed coefficient and where the letters start in the text. */

@@ -1,6 +1,10 @@
 package org.liepath.algebra.internal;
 
-/** Helpers for error messages that quote user text. Not part of the public API. */
+/**
+ * Helpers for error messages that quote user text. Not part of the public API.
+ *
+ * <p>Stateless static helpers: thread-safe.
+ */
 public final class Texts {
     private static final int WINDOW = 60;
 

@@ -3,6 +3,8 @@ package org.liepath.integrators.internal;
 /**
  * Commutator-free exponential step X ← exp(Ω_s) ··· exp(Ω_1) X with Ω_j = h Σ_k α_jk A(t + c_k h) (Ω_1 acts first).
  * The exponential midpoint rule is the one-row case. Adaptive runs use the step doubling of {@link Kernel#trial}.
+ *
+ * <p>Mutable and not thread-safe, like every {@link Kernel}: one instance per run or per stepper.
  */
 public final class CommutatorFreeKernel extends Kernel {
     private final double[] nodes;

@@ -11,6 +11,8 @@ package org.liepath.integrators.internal;
  *   univariate-integral form).</li>
  * </ul>
  * Adaptive runs use the step doubling of {@link Kernel#trial}.
+ *
+ * <p>Mutable and not thread-safe, like every {@link Kernel}: one instance per run or per stepper.
  */
 public final class MagnusKernel extends Kernel {
     private final int order;

@@ -11,6 +11,8 @@ import org.liepath.core.internal.Dense;
  * times: each squaring in scaling and squaring roughly doubles the departure from unitarity, so capping the scaling
  * at four squarings (θ_13 · 2⁴ ≈ 86, N.J. Higham, SIAM J. Matrix Anal. Appl. 26 (2005) 1179–1193) keeps long
  * constant segments unitary to rounding.
+ *
+ * <p>Mutable and not thread-safe, like every {@link Kernel}: one instance per run or per stepper.
  */
 public final class PiecewiseKernel extends Kernel {
     static final double MAX_NORM = 86.0;

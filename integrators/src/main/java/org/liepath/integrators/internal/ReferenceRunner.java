@@ -17,6 +17,8 @@ import java.util.Arrays;
  * by segment between breakpoints and sample times.
  *
  * <p>Not structure preserving: nothing re-unitarises the result, so its unitarity or trace drift is visible.
+ *
+ * <p>Stateless static helpers: thread-safe.
  */
 public final class ReferenceRunner {
     private ReferenceRunner() {

@@ -10,6 +10,9 @@ import java.util.Arrays;
  * estimate and the standard controller h_new = h·min(5, max(0.2, 0.9 (tol/err)^{1/(q+1)})) (E. Hairer, S.P. Nørsett,
  * G. Wanner, Solving Ordinary Differential Equations I, 2nd ed., Springer 1993, §II.4), landing exactly on every
  * breakpoint and sample time.
+ *
+ * <p>Thread-safety: each call of {@link #run} makes its own runner; the kernel it is given must not be used by
+ * another thread meanwhile.
  */
 public final class Runner {
     private static final double SAFETY = 0.9, FMIN = 0.2, FMAX = 5.0;

@@ -4,6 +4,8 @@ package org.liepath.integrators.internal;
  * Nodes and coefficient tables of the exponential schemes (values verified by the order test in this module's
  * tests). Rows of a commutator-free table are exponentials in the order they act (row 0 acts first); columns are
  * the quadrature nodes.
+ *
+ * <p>Stateless static helpers: thread-safe.
  */
 public final class Tables {
     private Tables() {
