@@ -22,7 +22,11 @@ public final class CommutationTable {
         return commute.length;
     }
 
-    /** @return whether [e_i, e_j] = 0 */
+    /**
+     * @param i the index
+     * @param j the index
+     * @return whether [e_i, e_j] = 0
+     */
     public boolean commutes(int i, int j) {
         Require.index(i, commute.length, "i");
         Require.index(j, commute.length, "j");

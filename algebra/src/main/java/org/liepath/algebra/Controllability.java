@@ -61,7 +61,12 @@ public final class Controllability {
         return new Controllability(g.matrixDimension(), g, Collections.unmodifiableList(keep), hermitianOps.size());
     }
 
-    /** The report for a Hamiltonian's operators. */
+    /**
+     * The report for a Hamiltonian's operators.
+     *
+     * @param h the Hamiltonian
+     * @return the report for a Hamiltonian's operators
+     */
     public static Controllability of(Hamiltonian h) {
         Require.nonNull(h, "hamiltonian");
         return of(h.operators());

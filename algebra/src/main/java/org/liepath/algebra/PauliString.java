@@ -48,6 +48,7 @@ public final class PauliString implements Comparable<PauliString> {
     /**
      * Parses letters I, X, Y, Z (upper or lower case), leftmost = qubit 0.
      *
+     * @param letters the Pauli letters, one per qubit
      * @throws InvalidInputException SYNTAX naming the position of the first bad letter; EMPTY for ""
      */
     public static PauliString of(String letters) {
@@ -69,13 +70,19 @@ public final class PauliString implements Comparable<PauliString> {
         return new PauliString(q, x, z);
     }
 
-    /** @return the identity string on {@code qubits} qubits */
+    /**
+     * @param qubits the number of qubits
+     * @return the identity string on {@code qubits} qubits
+     */
     public static PauliString identity(int qubits) {
         Require.positive(qubits, "qubits");
         return new PauliString(qubits, new long[words(qubits)], new long[words(qubits)]);
     }
 
     /**
+     * @param qubits the number of qubits
+     * @param qubit the qubit index (0 is the leftmost factor)
+     * @param letter the Pauli letter, one of I, X, Y, Z
      * @return the string with {@code letter} on {@code qubit} and I elsewhere, e.g. {@code single(5, 2, 'Z')} = IIZII
      * @throws InvalidInputException for a non-positive size, a qubit outside [0, qubits) or a bad letter
      */
@@ -84,6 +91,8 @@ public final class PauliString implements Comparable<PauliString> {
     }
 
     /**
+     * @param qubit the qubit index (0 is the leftmost factor)
+     * @param letter the Pauli letter, one of I, X, Y, Z
      * @return a copy of this string with {@code letter} on {@code qubit}
      * @throws InvalidInputException for a qubit outside [0, qubits()) or a letter other than I, X, Y, Z
      */
@@ -129,7 +138,10 @@ public final class PauliString implements Comparable<PauliString> {
         return qubits;
     }
 
-    /** @return the letter I, X, Y or Z on {@code qubit} */
+    /**
+     * @param qubit the qubit index (0 is the leftmost factor)
+     * @return the letter I, X, Y or Z on {@code qubit}
+     */
     public char letter(int qubit) {
         Require.index(qubit, qubits, "qubit");
         return "IXYZ".charAt(code(qubit));
@@ -177,6 +189,7 @@ public final class PauliString implements Comparable<PauliString> {
     // ------------------------------------------------------------------ algebra
 
     /**
+     * @param b the other string
      * @return true if this string and {@code b} commute (an even number of qubits where both letters are
      * non-identity and different)
      * @throws InvalidInputException if the strings have different lengths
@@ -186,7 +199,10 @@ public final class PauliString implements Comparable<PauliString> {
         return symplectic(x, z, b.x, b.z) == 0;
     }
 
-    /** @return true if this string and {@code b} anticommute; see {@link #commutes} */
+    /**
+     * @param b the other string
+     * @return true if this string and {@code b} anticommute; see {@link #commutes}
+     */
     public boolean anticommutes(PauliString b) {
         return !commutes(b);
     }
@@ -203,6 +219,8 @@ public final class PauliString implements Comparable<PauliString> {
     /**
      * The string part of the operator product: this·b = i^k · (this.times(b)) with k = {@link #phaseExponent(PauliString)}.
      *
+     * @param b the other string
+     * @return the string part of the operator product
      * @throws InvalidInputException if the strings have different lengths
      */
     public PauliString times(PauliString b) {
@@ -219,6 +237,8 @@ public final class PauliString implements Comparable<PauliString> {
      * The phase of the product: the k in {0, 1, 2, 3} with this·b = i^k · {@link #times}(b), exact for any length.
      * k is odd exactly when the strings anticommute.
      *
+     * @param b the other string
+     * @return the phase of the product
      * @throws InvalidInputException if the strings have different lengths
      */
     public int phaseExponent(PauliString b) {

@@ -49,6 +49,7 @@ public final class PauliSum {
     /**
      * Parses the text form, e.g. {@code "0.5 XXI + YYI - 2 ZII"} or {@code "-1e-3*xz + .5 ZZ"}.
      *
+     * @param text the text to parse
      * @throws InvalidInputException SYNTAX with the 0-based position of the first error; EMPTY for blank text;
      *                               NOT_FINITE for a coefficient that overflows a double; DIMENSION_MISMATCH if
      *                               strings of different lengths appear (naming the first offender)
@@ -71,12 +72,17 @@ public final class PauliSum {
         return fromMap(q, acc);
     }
 
-    /** @return the sum 1·P */
+    /**
+     * @param p the Pauli string
+     * @return the sum 1·P
+     */
     public static PauliSum of(PauliString p) {
         return of(1.0, p);
     }
 
     /**
+     * @param c the coefficient
+     * @param p the Pauli string
      * @return the sum c·P
      * @throws InvalidInputException for a null string or a non-finite coefficient
      */
@@ -94,6 +100,8 @@ public final class PauliSum {
     /**
      * The sum Σ c_k P_k of the given terms (repeated strings are added).
      *
+     * @param terms the terms
+     * @return the sum Σ c_k P_k of the given terms (repeated strings are added)
      * @throws InvalidInputException EMPTY for an empty map, NULL for a null key or value, NOT_FINITE for a NaN or
      *                               infinite coefficient, DIMENSION_MISMATCH for strings of different lengths
      */
@@ -121,7 +129,10 @@ public final class PauliSum {
         return fromMap(q, acc);
     }
 
-    /** @return the zero sum on {@code qubits} qubits */
+    /**
+     * @param qubits the number of qubits
+     * @return the zero sum on {@code qubits} qubits
+     */
     public static PauliSum zero(int qubits) {
         Require.positive(qubits, "qubits");
         return new PauliSum(qubits, new PauliString[0], new double[0]);
@@ -180,7 +191,10 @@ public final class PauliSum {
         return List.of(strings);
     }
 
-    /** @return the coefficient of {@code p} (0 when absent) */
+    /**
+     * @param p the Pauli string
+     * @return the coefficient of {@code p} (0 when absent)
+     */
     public double coefficient(PauliString p) {
         Require.nonNull(p, "p");
         int k = Arrays.binarySearch(strings, p);
@@ -220,12 +234,18 @@ public final class PauliSum {
 
     // ------------------------------------------------------------------ algebra
 
-    /** @return this + b (exactly cancelling terms vanish) */
+    /**
+     * @param b the other sum
+     * @return this + b (exactly cancelling terms vanish)
+     */
     public PauliSum plus(PauliSum b) {
         return combine(b, 1.0, "b");
     }
 
-    /** @return this − b */
+    /**
+     * @param b the other sum
+     * @return this − b
+     */
     public PauliSum minus(PauliSum b) {
         return combine(b, -1.0, "b");
     }
@@ -262,6 +282,7 @@ public final class PauliSum {
     }
 
     /**
+     * @param s the factor
      * @return s·this
      * @throws InvalidInputException for a non-finite factor or an overflowing product
      */
@@ -285,6 +306,9 @@ public final class PauliSum {
      * The bracket in the convention of dynamical Lie algebras: the Hermitian sum C = −i[A, B] for A = this and
      * B = {@code b}, so that [−iA, −iB] = −iC. Exact string by string: commuting pairs drop out and an anticommuting
      * pair gives [P, Q] = 2PQ = 2 i^k R with k odd, hence a term ±2 a_P b_Q R.
+     *
+     * @param b the other sum
+     * @return the bracket in the convention of dynamical Lie algebras
      */
     public PauliSum commutator(PauliSum b) {
         requireSame(b, "b");

@@ -68,6 +68,9 @@ public final class StructureConstants {
     }
 
     /**
+     * @param i the index
+     * @param j the index
+     * @param k the index
      * @return the real constant c_ij^k
      * @throws InvalidInputException for an index out of range, or (reason UNSUPPORTED) for complex constants, which
      *                               {@link #getComplex} returns
@@ -81,7 +84,12 @@ public final class StructureConstants {
         return signedGet(i, j, k)[0];
     }
 
-    /** @return c_ij^k as a complex number (imaginary part zero for real algebras) */
+    /**
+     * @param i the index
+     * @param j the index
+     * @param k the index
+     * @return c_ij^k as a complex number (imaginary part zero for real algebras)
+     */
     public Complex getComplex(int i, int j, int k) {
         check(i, j, k);
         double[] v = signedGet(i, j, k);

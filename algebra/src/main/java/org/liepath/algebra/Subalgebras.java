@@ -43,6 +43,9 @@ public final class Subalgebras {
      * not to 2^m. For the 15 non-identity two-qubit Pauli strings this visits the closed sets instead of the 32767
      * candidate subsets (milliseconds); the 63 three-qubit strings have about 1.1·10⁵ closed subsets (seconds).
      *
+     * @param basis the basis elements
+     * @return every non-empty subset of the basis that is closed under the bracket, each as a {@link LieAlgebra}
+     *     spanned by that subset (its {@link LieAlgebra#type()} is computed on demand)
      * @throws InvalidInputException NULL, EMPTY, DIMENSION_MISMATCH; LIMIT_EXCEEDED for more than {@value #MAX_BASIS}
      *                               elements or more than {@value #DEFAULT_MAX_SUBSETS} closed subsets; UNSUPPORTED if
      *                               the basis lacks the monomial-bracket property (the message names the pair);
@@ -56,6 +59,9 @@ public final class Subalgebras {
      * {@link #closedSubsets(List)} with a limit on the number of closed subsets. The list is built lazily: element k
      * is a new {@link LieAlgebra} made on each {@code get(k)} from the stored subset (no closure check is needed, the
      * table proved it), so a long list costs one bit mask per entry until its elements are used.
+     *
+     * @param basis the basis elements
+     * @param maxSubsets the largest number of closed subsets allowed (positive)
      */
     public static List<LieAlgebra> closedSubsets(List<Operator> basis, int maxSubsets) {
         Require.positive(maxSubsets, "maxSubsets");
@@ -75,7 +81,12 @@ public final class Subalgebras {
         };
     }
 
-    /** The closed subsets as sorted index arrays, in the order of {@link #closedSubsets}. */
+    /**
+     * The closed subsets as sorted index arrays, in the order of {@link #closedSubsets}.
+     *
+     * @param basis the basis elements
+     * @return the closed subsets as sorted index arrays, in the order of {@link #closedSubsets}
+     */
     public static List<int[]> closedIndexSets(List<Operator> basis) {
         Require.nonNull(basis, "basis");
         Table t = table(basis);
@@ -90,6 +101,8 @@ public final class Subalgebras {
      * The smallest closed subset containing the chosen elements, as an algebra; e.g. {@code closureOf(paulis, 0, 4)}.
      * (For generators without the monomial-bracket property use {@link LieAlgebra#generatedBy}.)
      *
+     * @param basis the basis elements
+     * @return the smallest closed subset containing the chosen elements, as an algebra
      * @throws InvalidInputException as {@link #closedSubsets}, and OUT_OF_RANGE / EMPTY for the indices
      */
     public static LieAlgebra closureOf(List<Operator> basis, int... chosen) {
@@ -106,7 +119,12 @@ public final class Subalgebras {
         return t.algebra(t.close(mask));
     }
 
-    /** The closure of a subset given as a bit mask (bit k = element k), as indices. */
+    /**
+     * The closure of a subset given as a bit mask (bit k = element k), as indices.
+     *
+     * @param basis the basis elements
+     * @return the closure of a subset given as a bit mask (bit k = element k), as indices
+     */
     public static int[] closureIndices(List<Operator> basis, int... chosen) {
         Table t = table(basis);
         long mask = 0;

@@ -22,7 +22,10 @@ import java.util.TreeSet;
  */
 @FunctionalInterface
 public interface Drive {
-    /** @return the amplitude at time t */
+    /**
+     * @param t the time
+     * @return the amplitude at time t
+     */
     double at(double t);
 
     /** @return times at which the drive is not smooth, ascending, possibly empty (default: none) */
@@ -40,13 +43,19 @@ public interface Drive {
         return false;
     }
 
-    /** @return the same function with a new name */
+    /**
+     * @param name the name
+     * @return the same function with a new name
+     */
     default Drive named(String name) {
         Require.nonNull(name, "name");
         return Drives.wrap(this, name);
     }
 
-    /** @return c(t) + other(t), breakpoints merged */
+    /**
+     * @param other the other operand
+     * @return c(t) + other(t), breakpoints merged
+     */
     default Drive plus(Drive other) {
         Require.nonNull(other, "other");
         Drive self = this;
@@ -55,7 +64,10 @@ public interface Drive {
                 "(" + name() + " + " + other.name() + ")", pc);
     }
 
-    /** @return c(t)·other(t), breakpoints merged */
+    /**
+     * @param other the other operand
+     * @return c(t)·other(t), breakpoints merged
+     */
     default Drive times(Drive other) {
         Require.nonNull(other, "other");
         Drive self = this;
@@ -64,14 +76,20 @@ public interface Drive {
                 name() + "·" + other.name(), pc);
     }
 
-    /** @return s·c(t) */
+    /**
+     * @param s the factor
+     * @return s·c(t)
+     */
     default Drive scale(double s) {
         Require.finite(s, "s");
         Drive self = this;
         return Drives.make(t -> s * self.at(t), breakpoints(), fmt(s) + "·" + name(), isPiecewiseConstant());
     }
 
-    /** @return c(t − dt), breakpoints shifted */
+    /**
+     * @param dt the step length
+     * @return c(t − dt), breakpoints shifted
+     */
     default Drive shift(double dt) {
         Require.finite(dt, "dt");
         Drive self = this;
@@ -82,7 +100,11 @@ public interface Drive {
         return Drives.make(t -> self.at(t - dt), b, name() + "(t" + signed(-dt) + ")", isPiecewiseConstant());
     }
 
-    /** @return c(t) on [start, end), zero elsewhere (a window with breakpoints at both ends) */
+    /**
+     * @param start the start of the window
+     * @param end the end of the window
+     * @return c(t) on [start, end), zero elsewhere (a window with breakpoints at both ends)
+     */
     default Drive window(double start, double end) {
         Require.finite(start, "start");
         Require.finite(end, "end");
@@ -99,13 +121,21 @@ public interface Drive {
 
     // ------------------------------------------------------------------ factories
 
-    /** @return the constant drive c */
+    /**
+     * @param c the coefficient
+     * @return the constant drive c
+     */
     static Drive constant(double c) {
         Require.finite(c, "c");
         return Drives.make(t -> c, new double[0], fmt(c), true);
     }
 
-    /** @return a cos(ω t + φ) */
+    /**
+     * @param amplitude the amplitude
+     * @param omega the angular frequency
+     * @param phase the phase (radians)
+     * @return a cos(ω t + φ)
+     */
     static Drive cosine(double amplitude, double omega, double phase) {
         Require.finite(amplitude, "amplitude");
         Require.finite(omega, "omega");
@@ -114,12 +144,21 @@ public interface Drive {
                 fmt(amplitude) + "·cos(" + fmt(omega) + "t" + signed(phase) + ")", false);
     }
 
-    /** @return a cos(ω t) */
+    /**
+     * @param amplitude the amplitude
+     * @param omega the angular frequency
+     * @return a cos(ω t)
+     */
     static Drive cosine(double amplitude, double omega) {
         return cosine(amplitude, omega, 0.0);
     }
 
-    /** @return a sin(ω t + φ) */
+    /**
+     * @param amplitude the amplitude
+     * @param omega the angular frequency
+     * @param phase the phase (radians)
+     * @return a sin(ω t + φ)
+     */
     static Drive sine(double amplitude, double omega, double phase) {
         Require.finite(amplitude, "amplitude");
         Require.finite(omega, "omega");
@@ -128,7 +167,12 @@ public interface Drive {
                 fmt(amplitude) + "·sin(" + fmt(omega) + "t" + signed(phase) + ")", false);
     }
 
-    /** @return a exp(−(t − t0)²/(2σ²)) */
+    /**
+     * @param amplitude the amplitude
+     * @param center the time of the peak
+     * @param sigma the width σ (positive)
+     * @return a exp(−(t − t0)²/(2σ²))
+     */
     static Drive gaussian(double amplitude, double center, double sigma) {
         Require.finite(amplitude, "amplitude");
         Require.finite(center, "center");
@@ -145,6 +189,7 @@ public interface Drive {
      *
      * @param times  n+1 strictly increasing finite times
      * @param values n finite values
+     * @return a piecewise-constant drive
      */
     static Drive piecewiseConstant(double[] times, double[] values) {
         Require.nonNull(times, "times");
@@ -179,6 +224,10 @@ public interface Drive {
 
     /**
      * Equally spaced piecewise-constant samples: value {@code values[k]} on [t0 + k·dt, t0 + (k+1)·dt).
+     *
+     * @param t0 the start time
+     * @param dt the step length
+     * @param values the values
      */
     static Drive samples(double t0, double dt, double... values) {
         Require.finite(t0, "t0");
@@ -196,6 +245,8 @@ public interface Drive {
      * extrapolation outside [times[0], times[n−1]]. Knots are breakpoints (the third derivative jumps there).
      *
      * @param times at least 3 strictly increasing finite times
+     * @param values the values
+     * @return a natural cubic spline through (times[k], values[k]) (Apache Commons Math {@code SplineInterpolator})
      */
     static Drive spline(double[] times, double[] values) {
         Require.nonNull(times, "times");

@@ -42,7 +42,10 @@ public final class Hamiltonian {
         return new Builder(dim);
     }
 
-    /** @return the time-independent Hamiltonian H (one term with constant coefficient 1) */
+    /**
+     * @param h the Hermitian operator
+     * @return the time-independent Hamiltonian H (one term with constant coefficient 1)
+     */
     public static Hamiltonian constant(Operator h) {
         Require.nonNull(h, "h");
         return builder(h.dim()).term(1.0, h).build();
@@ -71,6 +74,8 @@ public final class Hamiltonian {
     /**
      * Fills {@code out[k] = c_k(t)}.
      *
+     * @param t the time
+     * @param out output array
      * @throws InvalidInputException if t is not finite or out is null or shorter than {@link #size()}
      * @throws DriveException if a drive throws or returns a non-finite value (names the drive, term and time)
      */
@@ -97,7 +102,10 @@ public final class Hamiltonian {
         }
     }
 
-    /** @return H(t) = Σ c_k(t) A_k */
+    /**
+     * @param t the time
+     * @return H(t) = Σ c_k(t) A_k
+     */
     public Operator at(double t) {
         Require.finite(t, "t");
         double[] c = new double[ops.size()];
@@ -151,7 +159,10 @@ public final class Hamiltonian {
         return true;
     }
 
-    /** @return an upper bound for ‖H(t)‖₂: Σ |c_k(t)| ‖A_k‖_F */
+    /**
+     * @param t the time
+     * @return an upper bound for ‖H(t)‖₂: Σ |c_k(t)| ‖A_k‖_F
+     */
     public double normBound(double t) {
         double[] c = new double[ops.size()];
         coefficients(t, c);
@@ -182,13 +193,25 @@ public final class Hamiltonian {
             this.dim = dim;
         }
 
-        /** Adds the constant term c·A (A Hermitian). */
+        /**
+         * Adds the constant term c·A (A Hermitian).
+         *
+         * @param c the coefficient
+         * @param a the operator
+         * @return this builder
+         */
         public Builder term(double c, Operator a) {
             Require.finite(c, "c");
             return term(a, Drive.constant(c));
         }
 
-        /** Adds the driven term c(t)·A (A Hermitian). */
+        /**
+         * Adds the driven term c(t)·A (A Hermitian).
+         *
+         * @param a the operator
+         * @param c the drive
+         * @return this builder
+         */
         public Builder term(Operator a, Drive c) {
             String name = "operator of term " + ops.size();
             Require.nonNull(a, name);

@@ -54,12 +54,19 @@ public final class HilbertSpace {
         return dims.length;
     }
 
-    /** @return the dimension of subsystem k */
+    /**
+     * @param k the index
+     * @return the dimension of subsystem k
+     */
     public int dim(int k) {
         return dims[Require.index(k, dims.length, "k")];
     }
 
-    /** @return I ⊗ … ⊗ op (at position k) ⊗ … ⊗ I */
+    /**
+     * @param op the operator
+     * @param k the index
+     * @return I ⊗ … ⊗ op (at position k) ⊗ … ⊗ I
+     */
     public Operator embed(Operator op, int k) {
         Require.nonNull(op, "op");
         Require.index(k, dims.length, "k");
@@ -72,7 +79,13 @@ public final class HilbertSpace {
         return out;
     }
 
-    /** @return a ⊗ b acting on subsystems i and j (i ≠ j), identity elsewhere */
+    /**
+     * @param a the operator
+     * @param i the index
+     * @param b the other operator
+     * @param j the index
+     * @return a ⊗ b acting on subsystems i and j (i ≠ j), identity elsewhere
+     */
     public Operator embed(Operator a, int i, Operator b, int j) {
         Require.nonNull(a, "a");
         Require.nonNull(b, "b");
@@ -91,7 +104,10 @@ public final class HilbertSpace {
         return out;
     }
 
-    /** @return the Kronecker product of one operator per subsystem, in order */
+    /**
+     * @param ops the operators
+     * @return the Kronecker product of one operator per subsystem, in order
+     */
     public Operator product(Operator... ops) {
         Require.nonNull(ops, "ops");
         if (ops.length != dims.length) {
@@ -106,7 +122,10 @@ public final class HilbertSpace {
         return out;
     }
 
-    /** @return the product basis vector |k_0 k_1 …⟩ */
+    /**
+     * @param levels the number of levels of each subsystem
+     * @return the product basis vector |k_0 k_1 …⟩
+     */
     public StateVector basis(int... levels) {
         Require.nonNull(levels, "levels");
         if (levels.length != dims.length) {
@@ -139,6 +158,7 @@ public final class HilbertSpace {
      *
      * @param op     an operator of dimension {@link #dim()}
      * @param traced distinct subsystem indices to trace out (none: op is returned unchanged)
+     * @return the partial trace over the listed subsystems
      * @throws InvalidInputException for a null or wrongly sized operator, or an index out of range or repeated
      */
     public Operator partialTrace(Operator op, int... traced) {

@@ -55,7 +55,15 @@ public class InvalidInputException extends IllegalArgumentException {
         this.argument = argument;
     }
 
-    /** Builds the standard message {@code "<argument>: expected <expected>, got <seen>"}. */
+    /**
+     * Builds the standard message {@code "<argument>: expected <expected>, got <seen>"}.
+     *
+     * @param reason why the input was refused
+     * @param argument the name of the offending argument
+     * @param expected the form that was expected
+     * @param seen the value seen
+     * @return an exception with the standard message {@code "<argument>: expected <expected>, got <seen>"}
+     */
     public static InvalidInputException of(Reason reason, String argument, String expected, Object seen) {
         return new InvalidInputException(reason, argument, argument + ": expected " + expected + ", got " + seen);
     }

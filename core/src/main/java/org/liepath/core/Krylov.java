@@ -53,6 +53,11 @@ public final class Krylov {
     /**
      * As {@link #expMinusI(Operator, double, StateVector, double)} with Krylov dimension m (≥ 1, clamped to the
      * dimension).
+     *
+     * @param h the Hermitian operator
+     * @param t the time
+     * @param psi the state
+     * @param tol the tolerance (positive)
      */
     public static Result expMinusI(Operator h, double t, StateVector psi, double tol, int m) {
         Require.nonNull(h, "h");
@@ -74,7 +79,14 @@ public final class Krylov {
         return expAction(a, t, v, tol, DEFAULT_DIMENSION);
     }
 
-    /** As {@link #expAction(Operator, double, StateVector, double)} with Krylov dimension m (≥ 1). */
+    /**
+     * As {@link #expAction(Operator, double, StateVector, double)} with Krylov dimension m (≥ 1).
+     *
+     * @param a the operator
+     * @param t the time
+     * @param v the vector
+     * @param tol the tolerance (positive)
+     */
     public static Result expAction(Operator a, double t, StateVector v, double tol, int m) {
         Require.nonNull(a, "a");
         return run(false, a, t, v, tol, m, "v");

@@ -25,12 +25,21 @@ public final class Levels {
     private Levels() {
     }
 
-    /** @return the matrix unit |i⟩⟨j| in dimension d */
+    /**
+     * @param d the number of levels
+     * @param i the index
+     * @param j the index
+     * @return the matrix unit |i⟩⟨j| in dimension d
+     */
     public static Operator unit(int d, int i, int j) {
         return Operator.unit(d, i, j);
     }
 
-    /** @return the projector |k⟩⟨k| in dimension d */
+    /**
+     * @param d the number of levels
+     * @param k the index
+     * @return the projector |k⟩⟨k| in dimension d
+     */
     public static Operator projector(int d, int k) {
         return Operator.unit(d, k, k);
     }
@@ -39,6 +48,7 @@ public final class Levels {
      * The d²−1 generalized Gell-Mann matrices (see class comment for order and normalisation).
      *
      * @param d at least 2, at most {@value #MAX_LEVELS}
+     * @return the d²−1 generalized Gell-Mann matrices (see class comment for order and normalisation)
      */
     public static List<Operator> gellMann(int d) {
         if (d < 2 || d > MAX_LEVELS) {
@@ -78,7 +88,10 @@ public final class Levels {
         return Operator.diagonal(diag);
     }
 
-    /** @return the d-level ladder a = Σ sqrt(k) |k−1⟩⟨k| truncated to d levels (a harmonic-oscillator annihilator) */
+    /**
+     * @param d the number of levels
+     * @return the d-level ladder a = Σ sqrt(k) |k−1⟩⟨k| truncated to d levels (a harmonic-oscillator annihilator)
+     */
     public static Operator annihilation(int d) {
         Require.positive(d, "d");
         if (d > Operator.MAX_DIM) {

@@ -31,7 +31,10 @@ public final class Lindbladian {
         this.dissipator = buildDissipator();
     }
 
-    /** @return a builder around the Hamiltonian part */
+    /**
+     * @param h the Hamiltonian
+     * @return a builder around the Hamiltonian part
+     */
     public static Builder builder(Hamiltonian h) {
         Require.nonNull(h, "h");
         return new Builder(h);
@@ -62,14 +65,20 @@ public final class Lindbladian {
         return Superoperator.ofMatrix(dissipator);
     }
 
-    /** @return −i(I ⊗ A − Aᵀ ⊗ I): the column-stacking matrix of ρ ↦ −i[A, ρ] */
+    /**
+     * @param a the operator
+     * @return −i(I ⊗ A − Aᵀ ⊗ I): the column-stacking matrix of ρ ↦ −i[A, ρ]
+     */
     public static Operator hamiltonianPart(Operator a) {
         Require.nonNull(a, "a");
         Operator id = Operator.identity(a.dim());
         return id.kron(a).minus(a.transpose().kron(id)).timesI().scale(-1.0);
     }
 
-    /** @return the generator at time t */
+    /**
+     * @param t the time
+     * @return the generator at time t
+     */
     public Superoperator at(double t) {
         Require.finite(t, "t");
         return Superoperator.ofMatrix(hamiltonianPart(h.at(t)).plus(dissipator));
@@ -104,6 +113,7 @@ public final class Lindbladian {
      * as the null vector of the n²×n² generator (see {@link Superoperator#steadyState()}); the result is made exactly
      * Hermitian by averaging with its adjoint (the exact null state of a GKLS generator is Hermitian). Cost O(n⁶).
      *
+     * @return the steady state of a time-independent generator
      * @throws InvalidInputException with reason UNSUPPORTED if H is time dependent or the steady state is not unique
      */
     public Operator steadyState() {
@@ -130,6 +140,7 @@ public final class Lindbladian {
          *
          * @param rate γ ≥ 0 (finite)
          * @param l    the jump operator, same dimension as H
+         * @return this builder
          */
         public Builder jump(double rate, Operator l) {
             String name = "rate of jump " + jumps.size();

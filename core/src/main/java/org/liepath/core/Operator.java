@@ -42,6 +42,9 @@ public final class Operator {
     /**
      * An operator from real and imaginary parts given as square arrays of rows.
      *
+     * @param re the real parts, one array per row
+     * @param im the imaginary parts, one array per row
+     * @return an operator from real and imaginary parts given as square arrays of rows
      * @throws InvalidInputException if an array is null, empty, ragged, not square, of different sizes or holds a
      *                               non-finite number
      */
@@ -60,7 +63,12 @@ public final class Operator {
         return new Operator(n, r, i);
     }
 
-    /** A real operator (zero imaginary part). */
+    /**
+     * A real operator (zero imaginary part).
+     *
+     * @param re the real parts, one array per row
+     * @return a real operator (zero imaginary part)
+     */
     public static Operator real(double[][] re) {
         int n = Require.squareFinite(re, "re");
         double[] r = new double[n * n];
@@ -73,6 +81,10 @@ public final class Operator {
     /**
      * An operator from planar row-major arrays of length n² (copied).
      *
+     * @param n the dimension
+     * @param re the real parts
+     * @param im the imaginary parts
+     * @return an operator from planar row-major arrays of length n² (copied)
      * @throws InvalidInputException if lengths differ from n², or an entry is not finite
      */
     public static Operator ofPlanar(int n, double[] re, double[] im) {
@@ -90,7 +102,12 @@ public final class Operator {
         return new Operator(n, re.clone(), im.clone());
     }
 
-    /** The n×n identity. */
+    /**
+     * The n×n identity.
+     *
+     * @param n the dimension
+     * @return the n×n identity
+     */
     public static Operator identity(int n) {
         checkDim(n, "n");
         double[] r = new double[n * n];
@@ -100,13 +117,22 @@ public final class Operator {
         return new Operator(n, r, new double[n * n]);
     }
 
-    /** The n×n zero operator. */
+    /**
+     * The n×n zero operator.
+     *
+     * @param n the dimension
+     * @return the n×n zero operator
+     */
     public static Operator zero(int n) {
         checkDim(n, "n");
         return new Operator(n, new double[n * n], new double[n * n]);
     }
 
-    /** A real diagonal operator with the given diagonal. */
+    /**
+     * A real diagonal operator with the given diagonal.
+     *
+     * @return a real diagonal operator with the given diagonal
+     */
     public static Operator diagonal(double... d) {
         Require.nonNull(d, "d");
         if (d.length == 0) {
@@ -121,7 +147,14 @@ public final class Operator {
         return new Operator(n, r, new double[n * n]);
     }
 
-    /** The matrix unit |i⟩⟨j| of dimension n (a single 1 at row i, column j). */
+    /**
+     * The matrix unit |i⟩⟨j| of dimension n (a single 1 at row i, column j).
+     *
+     * @param n the dimension
+     * @param i the index
+     * @param j the index
+     * @return the matrix unit |i⟩⟨j| of dimension n (a single 1 at row i, column j)
+     */
     public static Operator unit(int n, int i, int j) {
         checkDim(n, "n");
         Require.index(i, n, "i");
@@ -131,7 +164,12 @@ public final class Operator {
         return new Operator(n, r, new double[n * n]);
     }
 
-    /** The outer product |a⟩⟨b|. */
+    /**
+     * The outer product |a⟩⟨b|.
+     *
+     * @param b the other state
+     * @return the outer product |a⟩⟨b|
+     */
     public static Operator outer(StateVector a, StateVector b) {
         Require.nonNull(a, "a");
         Require.nonNull(b, "b");
@@ -174,17 +212,29 @@ public final class Operator {
         return n;
     }
 
-    /** @return Re of entry (i, j) */
+    /**
+     * @param i the index
+     * @param j the index
+     * @return Re of entry (i, j)
+     */
     public double re(int i, int j) {
         return re[idx(i, j)];
     }
 
-    /** @return Im of entry (i, j) */
+    /**
+     * @param i the index
+     * @param j the index
+     * @return Im of entry (i, j)
+     */
     public double im(int i, int j) {
         return im[idx(i, j)];
     }
 
-    /** @return entry (i, j) */
+    /**
+     * @param i the index
+     * @param j the index
+     * @return entry (i, j)
+     */
     public Complex get(int i, int j) {
         int k = idx(i, j);
         return new Complex(re[k], im[k]);
@@ -253,7 +303,10 @@ public final class Operator {
         Require.sameDim(n, b.n, name);
     }
 
-    /** @return this + b */
+    /**
+     * @param b the other operator
+     * @return this + b
+     */
     public Operator plus(Operator b) {
         same(b, "b");
         double[] r = new double[n * n], i = new double[n * n];
@@ -264,7 +317,10 @@ public final class Operator {
         return checked(n, r, i, "b", "sum");
     }
 
-    /** @return this − b */
+    /**
+     * @param b the other operator
+     * @return this − b
+     */
     public Operator minus(Operator b) {
         same(b, "b");
         double[] r = new double[n * n], i = new double[n * n];
@@ -275,7 +331,10 @@ public final class Operator {
         return checked(n, r, i, "b", "difference");
     }
 
-    /** @return the matrix product this·b */
+    /**
+     * @param b the other operator
+     * @return the matrix product this·b
+     */
     public Operator times(Operator b) {
         same(b, "b");
         double[] r = new double[n * n], i = new double[n * n];
@@ -283,7 +342,10 @@ public final class Operator {
         return checked(n, r, i, "b", "product");
     }
 
-    /** @return s·this */
+    /**
+     * @param s the factor
+     * @return s·this
+     */
     public Operator scale(double s) {
         Require.finite(s, "s");
         double[] r = new double[n * n], i = new double[n * n];
@@ -294,7 +356,10 @@ public final class Operator {
         return checked(n, r, i, "s", "multiple");
     }
 
-    /** @return z·this */
+    /**
+     * @param z the factor
+     * @return z·this
+     */
     public Operator scale(Complex z) {
         Require.nonNull(z, "z");
         double zr = Require.finite(z.getReal(), "z (real part)"), zi = Require.finite(z.getImaginary(), "z (imaginary part)");
@@ -349,7 +414,10 @@ public final class Operator {
         return new Operator(n, re.clone(), i);
     }
 
-    /** @return the commutator [this, b] = this·b − b·this */
+    /**
+     * @param b the other operator
+     * @return the commutator [this, b] = this·b − b·this
+     */
     public Operator commutator(Operator b) {
         same(b, "b");
         double[] r1 = new double[n * n], i1 = new double[n * n], r2 = new double[n * n], i2 = new double[n * n];
@@ -362,7 +430,10 @@ public final class Operator {
         return checked(n, r1, i1, "b", "commutator");
     }
 
-    /** @return the anticommutator {this, b} = this·b + b·this */
+    /**
+     * @param b the other operator
+     * @return the anticommutator {this, b} = this·b + b·this
+     */
     public Operator anticommutator(Operator b) {
         same(b, "b");
         double[] r1 = new double[n * n], i1 = new double[n * n], r2 = new double[n * n], i2 = new double[n * n];
@@ -385,7 +456,10 @@ public final class Operator {
         return new Complex(r, i);
     }
 
-    /** @return the Hilbert–Schmidt inner product ⟨this, b⟩ = tr(this† b) */
+    /**
+     * @param b the other operator
+     * @return the Hilbert–Schmidt inner product ⟨this, b⟩ = tr(this† b)
+     */
     public Complex inner(Operator b) {
         same(b, "b");
         double r = 0, i = 0;
@@ -407,7 +481,10 @@ public final class Operator {
         return Dense.norm1(n, re, im);
     }
 
-    /** @return the Frobenius distance ‖this − b‖_F, the approximate-equality measure used throughout Liepath */
+    /**
+     * @param b the other operator
+     * @return the Frobenius distance ‖this − b‖_F, the approximate-equality measure used throughout Liepath
+     */
     public double distance(Operator b) {
         same(b, "b");
         double s = 0;
@@ -430,6 +507,7 @@ public final class Operator {
      * Whether ‖A − A†‖_F ≤ tol·max(1, ‖A‖_F).
      *
      * @param tol relative tolerance, non-negative
+     * @return whether ‖A − A†‖_F ≤ tol·max(1, ‖A‖_F)
      */
     public boolean isHermitian(double tol) {
         Require.nonNegative(tol, "tol");
@@ -459,7 +537,10 @@ public final class Operator {
         return 2 * q.value();
     }
 
-    /** @return the Kronecker product this ⊗ b (this is the left, slower-varying factor) */
+    /**
+     * @param b the other operator
+     * @return the Kronecker product this ⊗ b (this is the left, slower-varying factor)
+     */
     public Operator kron(Operator b) {
         Require.nonNull(b, "b");
         if ((long) n * b.n > MAX_DIM) {
@@ -492,6 +573,7 @@ public final class Operator {
      * matrix, normal or not; 2×2 matrices use a closed form. Relative accuracy near 1e-15·cond for well-conditioned
      * problems.
      *
+     * @return the matrix exponential e^A by scaling and squaring with Padé approximants (Higham 2005)
      * @throws InvalidInputException with reason NOT_FINITE if the result overflows
      */
     public Operator exp() {
@@ -510,6 +592,7 @@ public final class Operator {
      * exp(−i t H) for this operator H, which must be Hermitian; computed from a Hermitian eigendecomposition so the
      * result is unitary to rounding for any t.
      *
+     * @param t the time
      * @throws InvalidInputException if this is not Hermitian (relative tolerance 1e-12) or t is not finite
      */
     public Operator expMinusI(double t) {
@@ -520,7 +603,11 @@ public final class Operator {
         return new Operator(n, r, i);
     }
 
-    /** Throws unless this operator is Hermitian to a relative tolerance of 1e-12. */
+    /**
+     * Throws unless this operator is Hermitian to a relative tolerance of 1e-12.
+     *
+     * @param name the name
+     */
     public Operator requireHermitian(String name) {
         double d = hermitianDefect();
         if (d > 1e-12 * Math.max(1.0, norm())) {
@@ -634,6 +721,8 @@ public final class Operator {
     /**
      * The matrix power A^k for k ≥ 0 (A⁰ = I) by repeated squaring: about 2·log₂k products, each O(n³).
      *
+     * @param k the index
+     * @return the matrix power A^k for k ≥ 0 (A⁰ = I) by repeated squaring
      * @throws InvalidInputException if k is negative, or with reason NOT_FINITE if the result overflows
      */
     public Operator power(int k) {

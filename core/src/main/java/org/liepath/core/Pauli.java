@@ -55,6 +55,7 @@ public final class Pauli {
     /**
      * The dense Kronecker product of the letters of {@code s}, leftmost letter = qubit 0 = leftmost factor.
      *
+     * @return the dense Kronecker product of the letters of {@code s}, leftmost letter = qubit 0 = leftmost factor
      * @throws InvalidInputException for an empty string, a letter other than I/X/Y/Z (the message gives its
      *                               position), or more than {@value #MAX_QUBITS} letters
      */

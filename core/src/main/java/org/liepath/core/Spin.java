@@ -51,7 +51,10 @@ public final class Spin {
         return dim;
     }
 
-    /** @return the m value of basis index k (m = j − k) */
+    /**
+     * @param k the index
+     * @return the m value of basis index k (m = j − k)
+     */
     public double m(int k) {
         Require.index(k, dim, "k");
         return j - k;

@@ -51,7 +51,13 @@ public final class StateVector {
         return new StateVector(r, new double[n]);
     }
 
-    /** A vector from its real and imaginary parts (copied, equal lengths, finite). */
+    /**
+     * A vector from its real and imaginary parts (copied, equal lengths, finite).
+     *
+     * @param re the real parts
+     * @param im the imaginary parts
+     * @return a vector from its real and imaginary parts (copied, equal lengths, finite)
+     */
     public static StateVector of(double[] re, double[] im) {
         Require.nonNull(re, "re");
         Require.nonNull(im, "im");
@@ -66,7 +72,11 @@ public final class StateVector {
         return new StateVector(re.clone(), im.clone());
     }
 
-    /** A real vector. */
+    /**
+     * A real vector.
+     *
+     * @return a real vector
+     */
     public static StateVector real(double... re) {
         Require.nonNull(re, "re");
         return of(re, new double[re.length]);
@@ -77,23 +87,35 @@ public final class StateVector {
         return re.length;
     }
 
-    /** @return Re ψ_i */
+    /**
+     * @param i the index
+     * @return Re ψ_i
+     */
     public double re(int i) {
         return re[Require.index(i, re.length, "i")];
     }
 
-    /** @return Im ψ_i */
+    /**
+     * @param i the index
+     * @return Im ψ_i
+     */
     public double im(int i) {
         return im[Require.index(i, re.length, "i")];
     }
 
-    /** @return ψ_i */
+    /**
+     * @param i the index
+     * @return ψ_i
+     */
     public Complex get(int i) {
         Require.index(i, re.length, "i");
         return new Complex(re[i], im[i]);
     }
 
-    /** @return |ψ_i|² */
+    /**
+     * @param i the index
+     * @return |ψ_i|²
+     */
     public double probability(int i) {
         Require.index(i, re.length, "i");
         return re[i] * re[i] + im[i] * im[i];
@@ -131,7 +153,10 @@ public final class StateVector {
         return new StateVector(r, i);
     }
 
-    /** @return s·ψ */
+    /**
+     * @param s the factor
+     * @return s·ψ
+     */
     public StateVector scale(double s) {
         Require.finite(s, "s");
         double[] r = new double[re.length], i = new double[re.length];
@@ -142,7 +167,10 @@ public final class StateVector {
         return new StateVector(r, i);
     }
 
-    /** @return ψ + φ */
+    /**
+     * @param b the other state
+     * @return ψ + φ
+     */
     public StateVector plus(StateVector b) {
         Require.nonNull(b, "b");
         Require.sameDim(dim(), b.dim(), "b");
@@ -154,7 +182,10 @@ public final class StateVector {
         return new StateVector(r, i);
     }
 
-    /** @return the inner product ⟨this|b⟩ (conjugate-linear in this) */
+    /**
+     * @param b the other state
+     * @return the inner product ⟨this|b⟩ (conjugate-linear in this)
+     */
     public Complex inner(StateVector b) {
         Require.nonNull(b, "b");
         Require.sameDim(dim(), b.dim(), "b");
@@ -166,12 +197,18 @@ public final class StateVector {
         return new Complex(r, i);
     }
 
-    /** @return ⟨ψ|A|ψ⟩ */
+    /**
+     * @param a the operator
+     * @return ⟨ψ|A|ψ⟩
+     */
     public Complex expectation(Operator a) {
         return inner(apply(a));
     }
 
-    /** @return A|ψ⟩ */
+    /**
+     * @param a the operator
+     * @return A|ψ⟩
+     */
     public StateVector apply(Operator a) {
         Require.nonNull(a, "a");
         Require.sameDim(dim(), a.n, "a");
@@ -185,7 +222,10 @@ public final class StateVector {
         return Operator.outer(this, this);
     }
 
-    /** @return the Euclidean distance ‖ψ − φ‖ */
+    /**
+     * @param b the other state
+     * @return the Euclidean distance ‖ψ − φ‖
+     */
     public double distance(StateVector b) {
         Require.nonNull(b, "b");
         Require.sameDim(dim(), b.dim(), "b");
@@ -247,7 +287,10 @@ public final class StateVector {
 
     // ------------------------------------------------------------------ added conveniences
 
-    /** @return ψ − φ */
+    /**
+     * @param b the other state
+     * @return ψ − φ
+     */
     public StateVector minus(StateVector b) {
         Require.nonNull(b, "b");
         Require.sameDim(dim(), b.dim(), "b");
@@ -259,7 +302,10 @@ public final class StateVector {
         return new StateVector(r, i);
     }
 
-    /** @return z·ψ */
+    /**
+     * @param z the factor
+     * @return z·ψ
+     */
     public StateVector scale(Complex z) {
         Require.nonNull(z, "z");
         double zr = Require.finite(z.getReal(), "z (real part)"), zi = Require.finite(z.getImaginary(), "z (imaginary part)");
@@ -274,6 +320,9 @@ public final class StateVector {
     /**
      * The tensor product ψ ⊗ φ (this is the left, slower-varying factor, as in {@link Operator#kron}); dimension
      * dim(ψ)·dim(φ), which must fit in a Java array.
+     *
+     * @param b the other state
+     * @return the tensor product ψ ⊗ φ (this is the left, slower-varying factor, as in {@link Operator#kron})
      */
     public StateVector kron(StateVector b) {
         Require.nonNull(b, "b");

@@ -24,6 +24,7 @@ public final class Superoperator {
     /**
      * Wraps an n²×n² matrix in column-stacking convention.
      *
+     * @param s the operator
      * @throws InvalidInputException if the matrix dimension is not a perfect square
      */
     public static Superoperator ofMatrix(Operator s) {
@@ -36,7 +37,10 @@ public final class Superoperator {
         return new Superoperator(n, s);
     }
 
-    /** @return the identity map on n×n operators */
+    /**
+     * @param n the dimension
+     * @return the identity map on n×n operators
+     */
     public static Superoperator identity(int n) {
         Require.positive(n, "n");
         if (n > 215) { // (n²)² entries must fit in one array
@@ -45,7 +49,11 @@ public final class Superoperator {
         return new Superoperator(n, Operator.identity(n * n));
     }
 
-    /** @return X ↦ A X B, i.e. S = Bᵀ ⊗ A */
+    /**
+     * @param a the operator
+     * @param b the other operator
+     * @return X ↦ A X B, i.e. S = Bᵀ ⊗ A
+     */
     public static Superoperator sandwich(Operator a, Operator b) {
         Require.nonNull(a, "a");
         Require.nonNull(b, "b");
@@ -53,13 +61,19 @@ public final class Superoperator {
         return new Superoperator(a.dim(), b.transpose().kron(a));
     }
 
-    /** @return the unitary channel ρ ↦ U ρ U† (S = conj(U) ⊗ U) */
+    /**
+     * @param u the operator
+     * @return the unitary channel ρ ↦ U ρ U† (S = conj(U) ⊗ U)
+     */
     public static Superoperator unitary(Operator u) {
         Require.nonNull(u, "u");
         return new Superoperator(u.dim(), u.conjugate().kron(u));
     }
 
-    /** @return the Kraus channel ρ ↦ Σ K ρ K† */
+    /**
+     * @param ks the Kraus operators
+     * @return the Kraus channel ρ ↦ Σ K ρ K†
+     */
     public static Superoperator kraus(java.util.List<Operator> ks) {
         Require.nonNull(ks, "ks");
         if (ks.isEmpty()) {
@@ -88,7 +102,10 @@ public final class Superoperator {
         return matrix;
     }
 
-    /** @return E(ρ) */
+    /**
+     * @param rho the density matrix
+     * @return E(ρ)
+     */
     public Operator apply(Operator rho) {
         Require.nonNull(rho, "rho");
         Require.sameDim(n, rho.dim(), "rho");
@@ -112,21 +129,30 @@ public final class Superoperator {
         return new Operator(n, r, im);
     }
 
-    /** @return the composition this ∘ other (other acts first) */
+    /**
+     * @param other the other operand
+     * @return the composition this ∘ other (other acts first)
+     */
     public Superoperator compose(Superoperator other) {
         Require.nonNull(other, "other");
         Require.sameDim(n, other.n, "other");
         return new Superoperator(n, matrix.times(other.matrix));
     }
 
-    /** @return this + other */
+    /**
+     * @param other the other operand
+     * @return this + other
+     */
     public Superoperator plus(Superoperator other) {
         Require.nonNull(other, "other");
         Require.sameDim(n, other.n, "other");
         return new Superoperator(n, matrix.plus(other.matrix));
     }
 
-    /** @return s·this */
+    /**
+     * @param s the factor
+     * @return s·this
+     */
     public Superoperator scale(double s) {
         return new Superoperator(n, matrix.scale(s));
     }
@@ -136,7 +162,10 @@ public final class Superoperator {
         return new Superoperator(n, matrix.exp());
     }
 
-    /** @return exp(t S) */
+    /**
+     * @param t the time
+     * @return exp(t S)
+     */
     public Superoperator exp(double t) {
         Require.finite(t, "t");
         return new Superoperator(n, matrix.scale(t).exp());
@@ -199,7 +228,10 @@ public final class Superoperator {
         return worst;
     }
 
-    /** @return the Frobenius distance between the matrices */
+    /**
+     * @param other the other operand
+     * @return the Frobenius distance between the matrices
+     */
     public double distance(Superoperator other) {
         Require.nonNull(other, "other");
         Require.sameDim(n, other.n, "other");
@@ -221,6 +253,8 @@ public final class Superoperator {
      * which reproduce the map to that tolerance but are not the Hilbert–Schmidt-orthogonal canonical set of an
      * eigendecomposition. Cost O(rank·n⁴).
      *
+     * @return a Kraus representation E(ρ) = Σ_k K_k ρ K_k† of this map, read off a factorisation J = Σ_k v_k v_k† of
+     *     the Choi matrix (K_k[i][a] = v_k[a n + i], see the class comment)
      * @throws InvalidInputException with reason OUT_OF_RANGE if the map is not completely positive (J is not
      *                               Hermitian, has a negative pivot, or a remainder that is not negligible)
      */
@@ -311,6 +345,7 @@ public final class Superoperator {
      * row is minus the sum of the other diagonal rows); the square system is solved by Gaussian elimination with
      * complete pivoting. Cost O(n⁶).
      *
+     * @return the steady state of a generator
      * @throws InvalidInputException with reason UNSUPPORTED if S does not annihilate the trace (relative defect above
      *                               1e-10) or the steady state is not unique (relative pivot below 1e-12)
      */
@@ -400,6 +435,8 @@ public final class Superoperator {
     /**
      * The map whose Choi matrix is j (the inverse of {@link #choi()}): S[i + n j', a + n b] = J[a n + i, b n + j'].
      *
+     * @param j the Choi matrix
+     * @return the map whose Choi matrix is j (the inverse of {@link #choi()})
      * @throws InvalidInputException if j is null or its dimension is not a perfect square
      */
     public static Superoperator ofChoi(Operator j) {

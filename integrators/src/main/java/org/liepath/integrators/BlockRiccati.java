@@ -68,13 +68,22 @@ public final class BlockRiccati {
         return new BlockRiccati(h, split, Integer.MAX_VALUE, false);
     }
 
-    /** A copy that also decomposes the diagonal factors, halving blocks until they have at most leafSize rows. */
+    /**
+     * A copy that also decomposes the diagonal factors, halving blocks until they have at most leafSize rows.
+     *
+     * @param leafSize the largest block that is not split further
+     * @return a copy with this setting
+     */
     public BlockRiccati recursive(int leafSize) {
         Require.positive(leafSize, "leafSize");
         return new BlockRiccati(h, split, leafSize, reanchor);
     }
 
-    /** A copy that re-anchors (restarts the factors from the identity) instead of failing when U22 turns singular. */
+    /**
+     * A copy that re-anchors (restarts the factors from the identity) instead of failing when U22 turns singular.
+     *
+     * @return a copy with this setting
+     */
     public BlockRiccati withReanchoring() {
         return new BlockRiccati(h, split, leafSize, true);
     }
@@ -92,6 +101,7 @@ public final class BlockRiccati {
     /**
      * The right-hand side of the matrix Riccati equation, Z' = A12 + A11 Z − Z A22 − Z A21 Z with A = −iH(t).
      *
+     * @param t the time
      * @param z the off-diagonal block, n rows of N − n entries
      * @return Z' as n rows of N − n entries
      */
@@ -231,7 +241,10 @@ public final class BlockRiccati {
     /**
      * Integrates the factors from t0 to t1 (t1 &lt; t0 allowed) and reconstructs U.
      *
+     * @param t0 the start time
+     * @param t1 the end time
      * @param tol absolute and relative tolerance of the factor integration (&gt; 0)
+     * @return a copy with this setting
      */
     public Result run(double t0, double t1, double tol) {
         Require.finite(t0, "t0");

@@ -35,7 +35,10 @@ public final class Coordinates {
         return times.clone();
     }
 
-    /** @return the coordinates at recording k (a copy) */
+    /**
+     * @param k the index
+     * @return the coordinates at recording k (a copy)
+     */
     public Complex[] at(int k) {
         Require.index(k, times.length, "k");
         return values.get(k).clone();

@@ -133,6 +133,8 @@ public final class Evolution {
      * doubling), each relative to the Frobenius norm of the state — a bound under linear accumulation of local
      * errors; since the run propagates the two half steps, the true error is usually smaller. NaN for fixed-step
      * runs, the reference integrator and Wei–Norman runs; 0 for exact piecewise stepping.
+     *
+     * @return an estimate of the global error of an adaptive run
      */
     public double errorEstimate() {
         return errorEstimate;

@@ -96,13 +96,19 @@ public final class Evolve {
         return e;
     }
 
-    /** @return a configuration evolving under the Hamiltonian h (propagator mode until {@link #state} is given) */
+    /**
+     * @param h the Hamiltonian
+     * @return a configuration evolving under the Hamiltonian h (propagator mode until {@link #state} is given)
+     */
     public static Evolve of(Hamiltonian h) {
         Require.nonNull(h, "h");
         return new Evolve(h, null);
     }
 
-    /** @return a configuration evolving under the GKLS generator l (dynamical-map mode until {@link #density}) */
+    /**
+     * @param l the GKLS generator
+     * @return a configuration evolving under the GKLS generator l (dynamical-map mode until {@link #density})
+     */
     public static Evolve of(Lindbladian l) {
         Require.nonNull(l, "l");
         return new Evolve(null, l);
@@ -111,6 +117,9 @@ public final class Evolve {
     /**
      * The time interval. t1 &lt; t0 is a legal backward run (it gives the inverse propagator U(t0, t1)⁻¹ = U(t1, t0)).
      *
+     * @param t0 the start time
+     * @param t1 the end time
+     * @return a copy with this setting
      * @throws InvalidInputException for a non-finite time or t0 == t1
      */
     public Evolve over(double t0, double t1) {
@@ -125,7 +134,10 @@ public final class Evolve {
         return e;
     }
 
-    /** @return a copy using scheme s */
+    /**
+     * @param s the scheme
+     * @return a copy using scheme s
+     */
     public Evolve scheme(Scheme s) {
         Require.nonNull(s, "scheme");
         Evolve e = copy();
@@ -136,6 +148,8 @@ public final class Evolve {
     /**
      * Adaptive steps with relative local tolerance tol (see the class comment); clears {@link #steps}.
      *
+     * @param tol the tolerance (positive)
+     * @return a copy with this setting
      * @throws InvalidInputException unless 0 &lt; tol &lt; ∞
      */
     public Evolve tolerance(double tol) {
@@ -149,6 +163,8 @@ public final class Evolve {
     /**
      * n fixed steps of equal length (split at breakpoints and sample times); clears {@link #tolerance}.
      *
+     * @param n the dimension
+     * @return a copy with this setting
      * @throws InvalidInputException unless n ≥ 1
      */
     public Evolve steps(int n) {
@@ -164,6 +180,8 @@ public final class Evolve {
      * plus the exponential itself). The state must be normalised to within {@value #NORMALISATION_SLACK}: an
      * unnormalised state is refused rather than silently rescaled (use {@link StateVector#normalized()}).
      *
+     * @param psi the state
+     * @return a copy with this setting
      * @throws InvalidInputException for a wrong dimension (DIMENSION_MISMATCH), an unnormalised state
      *                               (OUT_OF_RANGE), or a Lindbladian configuration (UNSUPPORTED: use {@link #density})
      */
@@ -188,6 +206,8 @@ public final class Evolve {
      * Density mode for a GKLS evolution: evolve ρ(t0) = rho0. rho0 must be Hermitian (relative defect ≤ 1e-12) with
      * unit trace (± {@value #NORMALISATION_SLACK}); positivity is not checked.
      *
+     * @param rho0 the initial density matrix
+     * @return a copy with this setting
      * @throws InvalidInputException for a wrong dimension, a non-Hermitian operator, a trace other than 1, or a
      *                               Hamiltonian configuration (UNSUPPORTED)
      */
@@ -215,6 +235,9 @@ public final class Evolve {
      * run (status CANCELLED, the partial state in the trajectory), except at the last call, where nothing is left to
      * cancel. A listener that throws is not called again and the run goes on; the failure is recorded in
      * {@link Stats#monitorFailure()} and the status message.
+     *
+     * @param listener the progress listener (return false to cancel)
+     * @return a copy with this setting
      */
     public Evolve monitor(ProgressListener listener) {
         Require.nonNull(listener, "listener");
@@ -223,7 +246,12 @@ public final class Evolve {
         return e;
     }
 
-    /** An observer called after every accepted step (see {@link StepObserver}; failures handled as for monitors). */
+    /**
+     * An observer called after every accepted step (see {@link StepObserver}; failures handled as for monitors).
+     *
+     * @param obs the observer
+     * @return a copy with this setting
+     */
     public Evolve observe(StepObserver obs) {
         Require.nonNull(obs, "observer");
         Evolve e = copy();
@@ -234,6 +262,9 @@ public final class Evolve {
     /**
      * Records the result at these times (finite, inside the closed interval, checked at {@link #run()}); steps land on
      * them exactly.
+     *
+     * @param times the sample times
+     * @return a copy with this setting
      */
     public Evolve sampleAt(double... times) {
         Require.finite(times, "times");
@@ -242,7 +273,11 @@ public final class Evolve {
         return e;
     }
 
-    /** Records the result after every accepted step. */
+    /**
+     * Records the result after every accepted step.
+     *
+     * @return a copy with this setting
+     */
     public Evolve sampleEveryStep() {
         Evolve e = copy();
         e.everyStep = true;
@@ -253,6 +288,8 @@ public final class Evolve {
      * The step limit of adaptive runs (attempted steps, accepted or rejected; default {@value #DEFAULT_MAX_STEPS});
      * reaching it ends the run with STEP_LIMIT. Fixed-step runs take exactly their steps. Wei–Norman runs count
      * accepted steps of their coordinate integrator (summed over charts).
+     *
+     * @return a copy with this setting
      */
     public Evolve maxSteps(long n) {
         if (n <= 0) {

@@ -123,6 +123,9 @@ public final class Scheme {
     /**
      * A sixth-order commutator-free scheme with six exponentials on three Gauss nodes (an optimised table recalled
      * from the Alvermann–Fehske family of schemes; the attribution is unverified, the order is verified).
+     *
+     * @return a sixth-order commutator-free scheme with six exponentials on three Gauss nodes
+     *     recalled from the Alvermann–Fehske family of schemes
      */
     public static Scheme commutatorFree6() {
         return CF6;
@@ -142,6 +145,8 @@ public final class Scheme {
      * equation, with absolute and relative tolerance equal to the run's tolerance. It is <b>not</b> structure
      * preserving: its unitarity (or trace) drift is visible in results. Adaptive only (a run with fixed steps is
      * refused); no stepper. {@link #nodes()} counts its 12 stages per step; rejected steps are not reported.
+     *
+     * @return the reference integrator for validation
      */
     public static Scheme reference() {
         return REFERENCE;
@@ -152,6 +157,8 @@ public final class Scheme {
      * (the chart re-anchors itself when it turns singular) and returns the propagator in the chart's representation
      * and {@link Evolution#coordinates()}. Adaptive only; Hamiltonians only. {@link #order()} is 0 here (the accuracy
      * is set by the tolerance of the chart's own integrator).
+     *
+     * @param chart the Wei–Norman chart
      */
     public static Scheme weiNorman(WeiNorman chart) {
         Require.nonNull(chart, "chart");
@@ -186,6 +193,8 @@ public final class Scheme {
     /**
      * A zero-allocation stepper for this scheme and Hamiltonian (see {@link Stepper}).
      *
+     * @param h the Hamiltonian
+     * @return a zero-allocation stepper for this scheme and Hamiltonian (see {@link Stepper})
      * @throws InvalidInputException UNSUPPORTED for {@link #reference()} and Wei–Norman schemes, and for
      *                               {@link #piecewiseExact()} with drives that are not piecewise constant
      */
@@ -198,6 +207,9 @@ public final class Scheme {
     /**
      * A zero-allocation stepper in Liouville space for a GKLS generator (see {@link Stepper}); the state is vec(ρ)
      * (column stacking) or the n²×n² dynamical map.
+     *
+     * @param l the GKLS generator
+     * @return a zero-allocation stepper in Liouville space for a GKLS generator (see {@link Stepper})
      */
     public Stepper stepper(Lindbladian l) {
         Require.nonNull(l, "l");

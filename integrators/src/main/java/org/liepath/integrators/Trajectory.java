@@ -49,31 +49,46 @@ public final class Trajectory {
         return times.clone();
     }
 
-    /** @return the time of sample k */
+    /**
+     * @param k the index
+     * @return the time of sample k
+     */
     public double time(int k) {
         Require.index(k, times.length, "k");
         return times[k];
     }
 
-    /** @return U(t_k, t0) */
+    /**
+     * @param k the index
+     * @return U(t_k, t0)
+     */
     public Operator propagator(int k) {
         need(Mode.PROPAGATOR, k);
         return Operator.ofPlanar(n, re.get(k), im.get(k));
     }
 
-    /** @return ψ(t_k) */
+    /**
+     * @param k the index
+     * @return ψ(t_k)
+     */
     public StateVector state(int k) {
         need(Mode.STATE, k);
         return StateVector.of(re.get(k), im.get(k));
     }
 
-    /** @return ρ(t_k) */
+    /**
+     * @param k the index
+     * @return ρ(t_k)
+     */
     public Operator density(int k) {
         need(Mode.DENSITY, k);
         return unvec(n, re.get(k), im.get(k));
     }
 
-    /** @return the dynamical map from t0 to t_k */
+    /**
+     * @param k the index
+     * @return the dynamical map from t0 to t_k
+     */
     public Superoperator channel(int k) {
         need(Mode.CHANNEL, k);
         return Superoperator.ofMatrix(Operator.ofPlanar(n * n, re.get(k), im.get(k)));

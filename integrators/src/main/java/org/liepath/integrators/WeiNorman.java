@@ -73,6 +73,7 @@ public final class WeiNorman {
      * A chart for an ordered basis of a Lie algebra (real or complex matrices; used as given).
      *
      * @param orderedBasis X_1..X_m, X_1 the leftmost factor; linearly independent over ℂ and closed under brackets
+     * @return a chart for an ordered basis of a Lie algebra
      * @throws InvalidInputException NULL or EMPTY; DIMENSION_MISMATCH if the sizes differ; OUT_OF_RANGE if an element
      *                               lies in the span of the others; NOT_CLOSED naming a bracket [X_i, X_j] outside the
      *                               span; LIMIT_EXCEEDED above {@link #MAX_DIMENSION} elements
@@ -124,6 +125,8 @@ public final class WeiNorman {
      * H stay real; for a ladder ordering with Riccati equations use {@link #of(List)} with the ordering of your choice
      * or one from {@link WeiNormanOrderings}. The structure constants are recomputed from the basis.
      *
+     * @param algebra the Lie algebra
+     * @return a chart for the basis of an algebra, in the algebra's own order
      * @throws InvalidInputException NULL
      */
     public static WeiNorman of(LieAlgebra algebra) {
@@ -136,6 +139,7 @@ public final class WeiNorman {
      *
      * @param maxCondition the largest κ₁(Γ(g)) tolerated (&gt; 1; infinity: never on conditioning)
      * @param maxGrowth    the largest Π_k‖exp(g_kX_k)‖₁ tolerated (&gt; 1; infinity: never on growth)
+     * @return a copy with this setting
      */
     public WeiNorman withReanchorLimits(double maxCondition, double maxGrowth) {
         if (!(maxCondition > 1)) {
@@ -147,7 +151,11 @@ public final class WeiNorman {
         return new WeiNorman(basis, chart, maxCondition, maxGrowth);
     }
 
-    /** A copy that never re-anchors (runs fail with a status if the chart turns singular). */
+    /**
+     * A copy that never re-anchors (runs fail with a status if the chart turns singular).
+     *
+     * @return a copy with this setting
+     */
     public WeiNorman withoutReanchoring() {
         return new WeiNorman(basis, chart, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY);
     }
@@ -172,7 +180,11 @@ public final class WeiNorman {
         return basis;
     }
 
-    /** @return the structure constant c_{ij}^l with [X_i, X_j] = Σ_l c_{ij}^l X_l (0-based indices) */
+    /**
+     * @param i the index
+     * @param j the index
+     * @return the structure constant c_{ij}^l with [X_i, X_j] = Σ_l c_{ij}^l X_l (0-based indices)
+     */
     public Complex structureConstant(int i, int j, int l) {
         int m = chart.m;
         Require.index(i, m, "i");
@@ -181,7 +193,10 @@ public final class WeiNorman {
         return new Complex(chart.adRe[i][l * m + j], chart.adIm[i][l * m + j]);
     }
 
-    /** @return ad X_k as an m×m matrix: column j holds the coordinates of [X_k, X_j] */
+    /**
+     * @param k the index
+     * @return ad X_k as an m×m matrix: column j holds the coordinates of [X_k, X_j]
+     */
     public Operator adjoint(int k) {
         Require.index(k, chart.m, "k");
         return Operator.ofPlanar(chart.m, chart.adRe[k].clone(), chart.adIm[k].clone());
@@ -212,6 +227,8 @@ public final class WeiNorman {
     /**
      * The coordinate equations Γ(g)ġ = a(t) for dU/dt = −iH(t)U.
      *
+     * @param h the Hamiltonian
+     * @return the coordinate equations Γ(g)ġ = a(t) for dU/dt = −iH(t)U
      * @throws InvalidInputException DIMENSION_MISMATCH if h acts on another space; UNSUPPORTED naming the term whose
      *                               −iA_k leaves the span of the basis
      */
@@ -226,6 +243,7 @@ public final class WeiNorman {
      * form where X_k is diagonal, a single-band ladder operator (a finite polynomial) or strictly triangular, else by
      * Padé scaling and squaring; m − 1 matrix products.
      *
+     * @param g the coordinates g_1 … g_m
      * @throws InvalidInputException NULL, DIMENSION_MISMATCH (length ≠ m) or NOT_FINITE
      */
     public Operator propagator(Complex[] g) {
@@ -237,6 +255,7 @@ public final class WeiNorman {
     }
 
     /**
+     * @param g the coordinates g_1 … g_m
      * @return κ₁(Γ(g)), the condition number of the coordinate system at g (infinite where the chart is singular)
      */
     public double condition(Complex[] g) {
@@ -246,6 +265,8 @@ public final class WeiNorman {
     /**
      * The nonlinearity of the coordinate equations for a generic a(t) (see {@link Nonlinearity}); for (J+, Jz, J−)
      * of su(2) it is {@link Nonlinearity#RICCATI}.
+     *
+     * @return the nonlinearity of the coordinate equations for a generic a(t) (see {@link Nonlinearity})
      */
     public Nonlinearity nonlinearity() {
         Symbolic s = symbolic();

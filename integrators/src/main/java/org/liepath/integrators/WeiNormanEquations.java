@@ -94,7 +94,10 @@ public final class WeiNormanEquations {
         return c.m;
     }
 
-    /** @return a(t), the coordinates of −iH(t) in the chart's basis */
+    /**
+     * @param t the time
+     * @return a(t), the coordinates of −iH(t) in the chart's basis
+     */
     public Complex[] drive(double t) {
         Require.finite(t, "t");
         Workspace ws = workspace();
@@ -123,6 +126,8 @@ public final class WeiNormanEquations {
     /**
      * ġ = Γ(g)⁻¹ a(t).
      *
+     * @param t the time
+     * @param g the coordinates g_1 … g_m
      * @throws InvalidInputException for a wrong length or non-finite entries; OUT_OF_RANGE where Γ(g) is singular
      */
     public Complex[] derivative(double t, Complex[] g) {
@@ -144,6 +149,10 @@ public final class WeiNormanEquations {
      * Primitive tier: gDot = Γ(g)⁻¹ a(t) on interleaved arrays of length 2m; g is not modified. Allocates nothing;
      * does not validate (hot loop).
      *
+     * @param t the time
+     * @param g the coordinates, interleaved re/im
+     * @param gDot output: the derivatives, interleaved re/im
+     * @param ws the caller's workspace (one per thread)
      * @return false (and gDot unspecified) where Γ(g) is singular
      */
     public boolean derivative(double t, double[] g, double[] gDot, Workspace ws) {
@@ -151,7 +160,10 @@ public final class WeiNormanEquations {
         return c.solve(g, ws.aR, ws.aI, gDot, ws.w);
     }
 
-    /** @return κ₁(Γ(g)) */
+    /**
+     * @param g the coordinates g_1 … g_m
+     * @return κ₁(Γ(g))
+     */
     public double condition(Complex[] g) {
         return chart.condition(g);
     }
@@ -161,14 +173,20 @@ public final class WeiNormanEquations {
         return chart.nonlinearity();
     }
 
-    /** @return the nonlinearity of equation k (0-based) */
+    /**
+     * @param k the index
+     * @return the nonlinearity of equation k (0-based)
+     */
     public Nonlinearity nonlinearity(int k) {
         Require.index(k, c.m, "k");
         Symbolic s = chart.symbolic();
         return s == null ? Nonlinearity.GENERAL : map(s.kind(k));
     }
 
-    /** @return true if equation k (0-based) is a quadrature: its right-hand side does not involve g_k's block */
+    /**
+     * @param k the index
+     * @return true if equation k (0-based) is a quadrature: its right-hand side does not involve g_k's block
+     */
     public boolean isQuadrature(int k) {
         Require.index(k, c.m, "k");
         Symbolic s = chart.symbolic();
@@ -200,12 +218,18 @@ public final class WeiNormanEquations {
      * The equations as text: the product ansatz, ġ_k in closed form (solved form ġ = Γ(g)⁻¹a when det Γ is a single
      * exponential, else the implicit form Γ(g)ġ = a), the coefficients a_k(t) in terms of the drives, and the
      * classification. For (σ+, σz, σ−) it shows {@code g1' = a1 + 2 a2 g1 - a3 g1^2}.
+     *
+     * @return the equations as text
      */
     public String render() {
         return render(false);
     }
 
-    /** The same as {@link #render()} in LaTeX (an {@code aligned} environment plus definitions). */
+    /**
+     * The same as {@link #render()} in LaTeX (an {@code aligned} environment plus definitions).
+     *
+     * @return the same as {@link #render()} in LaTeX (an {@code aligned} environment plus definitions)
+     */
     public String renderLatex() {
         return render(true);
     }

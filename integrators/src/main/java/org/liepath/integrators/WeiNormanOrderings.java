@@ -68,7 +68,11 @@ public final class WeiNormanOrderings {
         }
     }
 
-    /** Proposals for the basis of an algebra. */
+    /**
+     * Proposals for the basis of an algebra.
+     *
+     * @param algebra the Lie algebra
+     */
     public static List<Proposal> propose(LieAlgebra algebra) {
         Require.nonNull(algebra, "algebra");
         return propose(algebra.basis());
@@ -77,6 +81,7 @@ public final class WeiNormanOrderings {
     /**
      * Proposals for a basis, best first (distinct orderings; the given order is always among them).
      *
+     * @param basis the basis elements
      * @throws InvalidInputException as {@link WeiNorman#of(List)} for a basis that is not closed or not independent
      */
     public static List<Proposal> propose(List<Operator> basis) {

@@ -63,12 +63,19 @@ public final class Checks {
         return u.dagger().times(u).distance(Operator.identity(u.dim()));
     }
 
-    /** @return whether {@link #unitarityError} ≤ {@link #UNITARITY_TOLERANCE} */
+    /**
+     * @param u the operator
+     * @return whether {@link #unitarityError} ≤ {@link #UNITARITY_TOLERANCE}
+     */
     public static boolean isUnitary(Operator u) {
         return isUnitary(u, UNITARITY_TOLERANCE);
     }
 
-    /** @return whether {@link #unitarityError} ≤ tol (tol ≥ 0) */
+    /**
+     * @param u the operator
+     * @param tol the tolerance (positive)
+     * @return whether {@link #unitarityError} ≤ tol (tol ≥ 0)
+     */
     public static boolean isUnitary(Operator u, double tol) {
         Require.nonNegative(tol, "tol");
         return unitarityError(u) <= tol;
@@ -79,18 +86,26 @@ public final class Checks {
      * largest entry of tr_out J − I.
      *
      * @param channel a dynamical map in column stacking
+     * @return the trace-preservation error of a channel
      */
     public static double traceError(Superoperator channel) {
         Require.nonNull(channel, "channel");
         return channel.traceDefect();
     }
 
-    /** @return whether {@link #traceError} ≤ {@link #TRACE_TOLERANCE} */
+    /**
+     * @param channel the channel (a superoperator, column stacking)
+     * @return whether {@link #traceError} ≤ {@link #TRACE_TOLERANCE}
+     */
     public static boolean isTracePreserving(Superoperator channel) {
         return isTracePreserving(channel, TRACE_TOLERANCE);
     }
 
-    /** @return whether {@link #traceError} ≤ tol */
+    /**
+     * @param channel the channel (a superoperator, column stacking)
+     * @param tol the tolerance (positive)
+     * @return whether {@link #traceError} ≤ tol
+     */
     public static boolean isTracePreserving(Superoperator channel, double tol) {
         Require.nonNegative(tol, "tol");
         return traceError(channel) <= tol;
@@ -103,18 +118,26 @@ public final class Checks {
      * qubit, not completely positive, gives −1 (J is the swap operator).
      *
      * @param channel a dynamical map in column stacking
+     * @return the smallest eigenvalue of the (unnormalised) Choi matrix J
      */
     public static double choiMinEigenvalue(Superoperator channel) {
         Require.nonNull(channel, "channel");
         return HermitianSpectrum.of(channel.choi()).min();
     }
 
-    /** @return whether λ_min(J) ≥ −{@link #POSITIVITY_TOLERANCE}·‖J‖_F */
+    /**
+     * @param channel the channel (a superoperator, column stacking)
+     * @return whether λ_min(J) ≥ −{@link #POSITIVITY_TOLERANCE}·‖J‖_F
+     */
     public static boolean isCompletelyPositive(Superoperator channel) {
         return isCompletelyPositive(channel, POSITIVITY_TOLERANCE);
     }
 
-    /** @return whether λ_min(J) ≥ −tol·‖J‖_F (tol ≥ 0, relative) */
+    /**
+     * @param channel the channel (a superoperator, column stacking)
+     * @param tol the tolerance (positive)
+     * @return whether λ_min(J) ≥ −tol·‖J‖_F (tol ≥ 0, relative)
+     */
     public static boolean isCompletelyPositive(Superoperator channel, double tol) {
         Require.nonNegative(tol, "tol");
         Require.nonNull(channel, "channel");
@@ -131,12 +154,19 @@ public final class Checks {
         return channel.choi().hermitianDefect();
     }
 
-    /** @return whether ‖J − J†‖_F ≤ {@link #HERMITICITY_TOLERANCE}·max(1, ‖J‖_F) */
+    /**
+     * @param channel the channel (a superoperator, column stacking)
+     * @return whether ‖J − J†‖_F ≤ {@link #HERMITICITY_TOLERANCE}·max(1, ‖J‖_F)
+     */
     public static boolean isHermiticityPreserving(Superoperator channel) {
         return isHermiticityPreserving(channel, HERMITICITY_TOLERANCE);
     }
 
-    /** @return whether ‖J − J†‖_F ≤ tol·max(1, ‖J‖_F) */
+    /**
+     * @param channel the channel (a superoperator, column stacking)
+     * @param tol the tolerance (positive)
+     * @return whether ‖J − J†‖_F ≤ tol·max(1, ‖J‖_F)
+     */
     public static boolean isHermiticityPreserving(Superoperator channel, double tol) {
         Require.nonNegative(tol, "tol");
         Require.nonNull(channel, "channel");

@@ -80,7 +80,12 @@ public final class ConvergenceStudy {
         return new Builder(label, n -> new Outcome(method.apply(n), -1), reference);
     }
 
-    /** As {@link #of(String, IntFunction, Operator)} with a method that also reports its evaluation count. */
+    /**
+     * As {@link #of(String, IntFunction, Operator)} with a method that also reports its evaluation count.
+     *
+     * @param label the label
+     * @param reference the reference result
+     */
     public static Builder ofOutcomes(String label, IntFunction<Outcome> method, Operator reference) {
         Require.nonNull(method, "method");
         return new Builder(label, method, reference);
@@ -90,6 +95,11 @@ public final class ConvergenceStudy {
      * Starts a study of a scheme with fixed steps on a Hamiltonian's propagator over [t0, t1], against the reference
      * integrator at {@link CrossCheck#DEFAULT_REFERENCE_TOLERANCE} (computed here, once). Evaluation counts come
      * from the runs' statistics. A run that does not succeed gives an unusable (NaN) point.
+     *
+     * @param h the Hamiltonian
+     * @param t0 the start time
+     * @param t1 the end time
+     * @param scheme the scheme
      */
     public static Builder of(Hamiltonian h, double t0, double t1, Scheme scheme) {
         Require.nonNull(h, "h");
@@ -98,7 +108,15 @@ public final class ConvergenceStudy {
         return of(h, t0, t1, scheme, ref);
     }
 
-    /** As {@link #of(Hamiltonian, double, double, Scheme)} with a given reference propagator (shared between studies). */
+    /**
+     * As {@link #of(Hamiltonian, double, double, Scheme)} with a given reference propagator (shared between studies).
+     *
+     * @param h the Hamiltonian
+     * @param t0 the start time
+     * @param t1 the end time
+     * @param scheme the scheme
+     * @param reference the reference result
+     */
     public static Builder of(Hamiltonian h, double t0, double t1, Scheme scheme, Operator reference) {
         Require.nonNull(h, "h");
         Require.nonNull(scheme, "scheme");
@@ -126,6 +144,7 @@ public final class ConvergenceStudy {
         /**
          * @param startSteps the coarsest step count (≥ 1)
          * @param levels     how many runs (2 … {@value #MAX_LEVELS}); the finest uses startSteps·2^(levels−1)
+         * @return this builder
          */
         public Builder steps(int startSteps, int levels) {
             Require.positive(startSteps, "startSteps");
@@ -141,13 +160,20 @@ public final class ConvergenceStudy {
             return this;
         }
 
-        /** @param span the interval length |t1 − t0|, used to report step sizes (default 1) */
+        /**
+         * @param span the interval length |t1 − t0|, used to report step sizes (default 1)
+         * @return this builder
+         */
         public Builder span(double span) {
             this.span = Require.positive(span, "span");
             return this;
         }
 
-        /** Runs every level (sequentially, coarsest first) and fits the order. */
+        /**
+         * Runs every level (sequentially, coarsest first) and fits the order.
+         *
+         * @return a copy with this setting
+         */
         public ConvergenceStudy run() {
             List<Point> pts = new ArrayList<>();
             for (int l = 0; l < levels; l++) {

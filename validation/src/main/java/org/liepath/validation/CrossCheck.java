@@ -50,12 +50,20 @@ public final class CrossCheck {
         this.structure = structure;
     }
 
-    /** Starts a cross-check of the propagator of a Hamiltonian. */
+    /**
+     * Starts a cross-check of the propagator of a Hamiltonian.
+     *
+     * @param h the Hamiltonian
+     */
     public static Builder of(Hamiltonian h) {
         return new Builder(Require.nonNull(h, "h"), null);
     }
 
-    /** Starts a cross-check of the dynamical map (channel) of a GKLS generator. */
+    /**
+     * Starts a cross-check of the dynamical map (channel) of a GKLS generator.
+     *
+     * @param l the GKLS generator
+     */
     public static Builder of(Lindbladian l) {
         return new Builder(null, Require.nonNull(l, "l"));
     }
@@ -76,34 +84,57 @@ public final class CrossCheck {
             this.l = l;
         }
 
-        /** The interval (t1 &lt; t0 allowed; t0 == t1 refused at {@link #run()} by the evolution builder). */
+        /**
+         * The interval (t1 &lt; t0 allowed; t0 == t1 refused at {@link #run()} by the evolution builder).
+         *
+         * @param t0 the start time
+         * @param t1 the end time
+         * @return this builder
+         */
         public Builder over(double t0, double t1) {
             this.t0 = Require.finite(t0, "t0");
             this.t1 = Require.finite(t1, "t1");
             return this;
         }
 
-        /** Adds a scheme run adaptively at the builder's {@link #tolerance}. */
+        /**
+         * Adds a scheme run adaptively at the builder's {@link #tolerance}.
+         *
+         * @param s the scheme
+         * @return this builder
+         */
         public Builder scheme(Scheme s) {
             schemes.add(Require.nonNull(s, "s"));
             steps.add(0);
             return this;
         }
 
-        /** Adds a scheme run with n fixed steps. */
+        /**
+         * Adds a scheme run with n fixed steps.
+         *
+         * @param s the scheme
+         * @param n the dimension
+         * @return this builder
+         */
         public Builder scheme(Scheme s, int n) {
             schemes.add(Require.nonNull(s, "s"));
             steps.add(Require.positive(n, "n"));
             return this;
         }
 
-        /** @param tol the tolerance of adaptive scheme runs (default {@link Evolve#DEFAULT_TOLERANCE}) */
+        /**
+         * @param tol the tolerance of adaptive scheme runs (default {@link Evolve#DEFAULT_TOLERANCE})
+         * @return this builder
+         */
         public Builder tolerance(double tol) {
             this.tolerance = Require.positive(tol, "tol");
             return this;
         }
 
-        /** @param tol the reference run's tolerance (default {@link #DEFAULT_REFERENCE_TOLERANCE}) */
+        /**
+         * @param tol the reference run's tolerance (default {@link #DEFAULT_REFERENCE_TOLERANCE})
+         * @return this builder
+         */
         public Builder referenceTolerance(double tol) {
             this.refTol = Require.positive(tol, "tol");
             return this;
@@ -112,13 +143,20 @@ public final class CrossCheck {
         /**
          * Uses an exact result instead of the reference integrator: the propagator (Hamiltonian) or the channel's
          * n²×n² matrix in column stacking (Lindbladian).
+         *
+         * @return this builder
          */
         public Builder reference(Operator exact) {
             this.reference = Require.nonNull(exact, "exact");
             return this;
         }
 
-        /** Receives (fraction of schemes done, schemes done) after each run; false cancels the remaining runs. */
+        /**
+         * Receives (fraction of schemes done, schemes done) after each run; false cancels the remaining runs.
+         *
+         * @param listener the progress listener (return false to cancel)
+         * @return this builder
+         */
         public Builder monitor(ProgressListener listener) {
             this.monitor = Require.nonNull(listener, "listener");
             return this;
@@ -127,6 +165,7 @@ public final class CrossCheck {
         /**
          * Runs the reference (unless given) and every scheme.
          *
+         * @return a copy with this setting
          * @throws InvalidInputException if no interval or no scheme was given, or a supplied reference has the wrong
          *                               dimension; scheme-specific refusals come from {@link Evolve#run()}
          */

@@ -67,7 +67,11 @@ public final class Demo {
     public record Outcome(Report report, Map<String, String> figures) {
     }
 
-    /** Runs the demo; prints progress to the console. Argument: the report folder (default liepath-report). */
+    /**
+     * Runs the demo; prints progress to the console. Argument: the report folder (default liepath-report).
+     *
+     * @param args the command-line arguments
+     */
     public static void main(String[] args) {
         if (System.getProperty("java.awt.headless") == null) {
             System.setProperty("java.awt.headless", "true");
@@ -86,7 +90,11 @@ public final class Demo {
         return Drive.gaussian(amp, T / 2, SIGMA).named("J(t)");
     }
 
-    /** The demo Hamiltonian (invented numbers). */
+    /**
+     * The demo Hamiltonian (invented numbers).
+     *
+     * @return the demo Hamiltonian (invented numbers)
+     */
     public static Hamiltonian hamiltonian() {
         Drive detuning = Drive.sine(DELTA_A_SWING / 2, 2 * Math.PI / T, 0).plus(Drive.constant(DELTA_A / 2))
                 .named("δ_A(t)/2");
@@ -95,12 +103,20 @@ public final class Demo {
                 .term(exchange, exchangePulse()).build();
     }
 
-    /** The target gate exp(−i(π/4)(XX + YY)). */
+    /**
+     * The target gate exp(−i(π/4)(XX + YY)).
+     *
+     * @return the target gate exp(−i(π/4)(XX + YY))
+     */
     public static Operator target() {
         return Pauli.string("XX").plus(Pauli.string("YY")).expMinusI(Math.PI / 4);
     }
 
-    /** The demo GKLS generator: the Hamiltonian plus amplitude damping (γ₁) and dephasing (γ_φ) on each site. */
+    /**
+     * The demo GKLS generator: the Hamiltonian plus amplitude damping (γ₁) and dephasing (γ_φ) on each site.
+     *
+     * @return the demo GKLS generator
+     */
     public static Lindbladian lindbladian() {
         Operator lower = Operator.unit(2, 0, 1);   // |0⟩⟨1|: decay into |0⟩, taken as the ground level
         Operator id = Operator.identity(2);

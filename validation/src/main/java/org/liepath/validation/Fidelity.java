@@ -86,6 +86,9 @@ public final class Fidelity {
     /**
      * Entanglement (process) fidelity F_e = tr(S_U† S)/d² between a target unitary and a channel (real part; the
      * imaginary part vanishes for Hermiticity-preserving maps).
+     *
+     * @param target the target unitary
+     * @param channel the channel (a superoperator, column stacking)
      */
     public static double entanglement(Operator target, Superoperator channel) {
         requireUnitaryTarget(target);
@@ -96,7 +99,11 @@ public final class Fidelity {
         return su.inner(channel.matrix()).getReal() / ((double) d * d);
     }
 
-    /** @return |⟨ψ|φ⟩|² / (‖ψ‖²‖φ‖²) for pure states (normalisation divided out) */
+    /**
+     * @param psi the state
+     * @param phi the second state
+     * @return |⟨ψ|φ⟩|² / (‖ψ‖²‖φ‖²) for pure states (normalisation divided out)
+     */
     public static double state(StateVector psi, StateVector phi) {
         Require.nonNull(psi, "psi");
         Require.nonNull(phi, "phi");
@@ -109,7 +116,11 @@ public final class Fidelity {
         return (ov.getReal() * ov.getReal() + ov.getImaginary() * ov.getImaginary()) / n2;
     }
 
-    /** @return ⟨ψ|ρ|ψ⟩/‖ψ‖², the fidelity of a pure state with a density matrix */
+    /**
+     * @param psi the state
+     * @param rho the density matrix
+     * @return ⟨ψ|ρ|ψ⟩/‖ψ‖², the fidelity of a pure state with a density matrix
+     */
     public static double state(StateVector psi, Operator rho) {
         Require.nonNull(psi, "psi");
         requireDensity(rho, "rho");
@@ -124,6 +135,8 @@ public final class Fidelity {
     /**
      * Uhlmann fidelity (tr √(√ρ σ √ρ))² of two density matrices, in [0, 1]; symmetric in its arguments.
      *
+     * @param rho the density matrix
+     * @param sigma the second density matrix
      * @throws InvalidInputException if either is not a density matrix within {@link #DENSITY_TOLERANCE}
      */
     public static double state(Operator rho, Operator sigma) {
@@ -139,13 +152,19 @@ public final class Fidelity {
         return Math.min(1.0, s * s);
     }
 
-    /** @return the purity tr ρ² (1 for pure states, 1/d for the maximally mixed state) */
+    /**
+     * @param rho the density matrix
+     * @return the purity tr ρ² (1 for pure states, 1/d for the maximally mixed state)
+     */
     public static double purity(Operator rho) {
         requireDensity(rho, "rho");
         return rho.inner(rho).getReal();
     }
 
-    /** @return the von Neumann entropy −Σ λ ln λ in nats (0 for pure states, ln d at most) */
+    /**
+     * @param rho the density matrix
+     * @return the von Neumann entropy −Σ λ ln λ in nats (0 for pure states, ln d at most)
+     */
     public static double entropy(Operator rho) {
         requireDensity(rho, "rho");
         double s = 0;
@@ -158,7 +177,10 @@ public final class Fidelity {
         return s;
     }
 
-    /** @return {@link #purity} of each density matrix of a trajectory, in order */
+    /**
+     * @param trajectory the trajectory
+     * @return {@link #purity} of each density matrix of a trajectory, in order
+     */
     public static double[] purity(List<Operator> trajectory) {
         Require.nonNull(trajectory, "trajectory");
         double[] out = new double[trajectory.size()];
@@ -168,7 +190,10 @@ public final class Fidelity {
         return out;
     }
 
-    /** @return {@link #entropy} of each density matrix of a trajectory, in order */
+    /**
+     * @param trajectory the trajectory
+     * @return {@link #entropy} of each density matrix of a trajectory, in order
+     */
     public static double[] entropy(List<Operator> trajectory) {
         Require.nonNull(trajectory, "trajectory");
         double[] out = new double[trajectory.size()];
@@ -182,13 +207,18 @@ public final class Fidelity {
      * Purity of each sample of a density-mode trajectory ({@code Evolve.of(l)…density(rho0).sampleAt(…)}). Samples
      * are symmetrised, (ρ + ρ†)/2, so that integration round-off in the Hermitian part does not count as misuse.
      *
+     * @param trajectory the trajectory
      * @throws IllegalStateException if the trajectory does not hold densities (from {@link Trajectory#density})
      */
     public static double[] purity(Trajectory trajectory) {
         return purity(densities(trajectory));
     }
 
-    /** Entropy of each sample of a density-mode trajectory, as {@link #purity(Trajectory)}. */
+    /**
+     * Entropy of each sample of a density-mode trajectory, as {@link #purity(Trajectory)}.
+     *
+     * @param trajectory the trajectory
+     */
     public static double[] entropy(Trajectory trajectory) {
         return entropy(densities(trajectory));
     }

@@ -102,6 +102,10 @@ public final class MagnusSeries {
     /**
      * Computes Ω1 … Ω4 for the Hamiltonian over [t0, t1] (t1 &lt; t0 is a backward run: the terms of U(t1, t0)).
      *
+     * @param h the Hamiltonian
+     * @param t0 the start time
+     * @param t1 the end time
+     * @return the Magnus series of h over [t0, t1]
      * @throws InvalidInputException if h is null, t0 or t1 is not finite, the interval is empty (t0 == t1), or more than
      *                               {@link #MAX_PANELS} panels would be needed
      * @throws org.liepath.core.DriveException if a drive fails at a quadrature node
@@ -283,6 +287,8 @@ public final class MagnusSeries {
      * (its Hermitian part, to remove rounding), so the result is unitary to rounding.
      *
      * @param k how many terms, 1 … 4
+     * @return the truncated Magnus propagator exp(Ω1 + … + Ωk), computed as exp(−iK) with the Hermitian K = i(Ω1 + … +
+     *     Ωk) (its Hermitian part, to remove rounding), so the result is unitary to rounding
      */
     public Operator propagator(int k) {
         Operator kh = exponent(k).timesI();
@@ -297,6 +303,8 @@ public final class MagnusSeries {
     /**
      * Whether the Moan–Niesen sufficient condition ∫‖A‖₂ &lt; π holds with a relative safety margin of 1e-6 against
      * the quadrature of the indicator. False does not mean the series diverges.
+     *
+     * @return whether the Moan–Niesen sufficient condition ∫‖A‖₂ &lt; π holds
      */
     public boolean isConvergenceGuaranteed() {
         return indicator < Math.PI * (1 - 1e-6);

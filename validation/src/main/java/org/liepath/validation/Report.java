@@ -61,7 +61,11 @@ public final class Report {
         return files;
     }
 
-    /** Starts a report with a title (the summary's first heading). */
+    /**
+     * Starts a report with a title (the summary's first heading).
+     *
+     * @param title the title
+     */
     public static Builder builder(String title) {
         return new Builder(Require.nonNull(title, "title"));
     }
@@ -70,6 +74,9 @@ public final class Report {
      * Starts a line plot, saved as a PNG of the given file name in the report folder.
      *
      * @param fileName a plain file name ending in .png (letters, digits, '.', '_', '-')
+     * @param title the title
+     * @param xLabel the label of the horizontal axis
+     * @param yLabel the label of the vertical axis
      */
     public static Plot plot(String fileName, String title, String xLabel, String yLabel) {
         Require.nonNull(fileName, "fileName");
@@ -96,19 +103,31 @@ public final class Report {
             this.yLabel = yLabel;
         }
 
-        /** Logarithmic x axis. */
+        /**
+         * Logarithmic x axis.
+         *
+         * @return a copy with this setting
+         */
         public Plot logX() {
             logX = true;
             return this;
         }
 
-        /** Logarithmic y axis. */
+        /**
+         * Logarithmic y axis.
+         *
+         * @return a copy with this setting
+         */
         public Plot logY() {
             logY = true;
             return this;
         }
 
-        /** Image size in pixels (default 800 × 500; each 100 … 4000). */
+        /**
+         * Image size in pixels (default 800 × 500; each 100 … 4000).
+         *
+         * @return a copy with this setting
+         */
         public Plot size(int width, int height) {
             if (width < 100 || width > 4000 || height < 100 || height > 4000) {
                 throw InvalidInputException.of(Reason.OUT_OF_RANGE, "size", "width and height in 100 … 4000",
@@ -119,12 +138,22 @@ public final class Report {
             return this;
         }
 
-        /** Adds a series drawn as a line. */
+        /**
+         * Adds a series drawn as a line.
+         *
+         * @param name the name
+         * @return a copy with this setting
+         */
         public Plot line(String name, double[] x, double[] y) {
             return add(name, x, y, false);
         }
 
-        /** Adds a series drawn as a line with markers at the data points. */
+        /**
+         * Adds a series drawn as a line with markers at the data points.
+         *
+         * @param name the name
+         * @return a copy with this setting
+         */
         public Plot points(String name, double[] x, double[] y) {
             return add(name, x, y, true);
         }
@@ -207,31 +236,56 @@ public final class Report {
             md.append("# ").append(title).append("\n\n");
         }
 
-        /** Adds a second-level heading. */
+        /**
+         * Adds a second-level heading.
+         *
+         * @param text the text to parse
+         * @return this builder
+         */
         public Builder heading(String text) {
             md.append("## ").append(Require.nonNull(text, "text")).append("\n\n");
             return this;
         }
 
-        /** Adds a paragraph (Markdown allowed). */
+        /**
+         * Adds a paragraph (Markdown allowed).
+         *
+         * @param text the text to parse
+         * @return this builder
+         */
         public Builder paragraph(String text) {
             md.append(Require.nonNull(text, "text").strip()).append("\n\n");
             return this;
         }
 
-        /** Adds preformatted text (a code block). */
+        /**
+         * Adds preformatted text (a code block).
+         *
+         * @param text the text to parse
+         * @return this builder
+         */
         public Builder preformatted(String text) {
             md.append("```\n").append(Require.nonNull(text, "text").stripTrailing()).append("\n```\n\n");
             return this;
         }
 
-        /** Adds a Markdown table (for instance {@link CrossCheck#toMarkdown()}). */
+        /**
+         * Adds a Markdown table (for instance {@link CrossCheck#toMarkdown()}).
+         *
+         * @param markdownTable the table in Markdown
+         * @return this builder
+         */
         public Builder table(String markdownTable) {
             md.append(Require.nonNull(markdownTable, "markdownTable").strip()).append("\n\n");
             return this;
         }
 
-        /** Adds a plot: rendered at {@link #write}, and shown in the summary under its title. */
+        /**
+         * Adds a plot: rendered at {@link #write}, and shown in the summary under its title.
+         *
+         * @param plot the plot
+         * @return this builder
+         */
         public Builder figure(Plot plot) {
             Require.nonNull(plot, "plot");
             for (Plot p : plots) {
@@ -254,6 +308,8 @@ public final class Report {
          * Creates the folder (and parents) if needed and writes the summary and every plot, replacing files of the
          * same names.
          *
+         * @param folder the folder
+         * @return a copy with this setting
          * @throws UncheckedIOException if a file cannot be written
          */
         public Report write(Path folder) {
