@@ -36,6 +36,7 @@ public final class Controllability {
 
     /**
      * @param hermitianOps the system's Hermitian terms (drift and controls alike)
+     * @return the controllability report
      * @throws org.liepath.core.InvalidInputException as {@link LieAlgebra#generatedBy(List)}
      */
     public static Controllability of(List<Operator> hermitianOps) {

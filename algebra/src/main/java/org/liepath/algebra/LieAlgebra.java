@@ -150,6 +150,7 @@ public final class LieAlgebra {
      *
      * @param basis the basis elements
      * @param tolerance the tolerance (positive)
+     * @return the real span of the basis, checked for closure
      */
     public static LieAlgebra spannedBy(List<Operator> basis, double tolerance) {
         Require.positive(tolerance, "tolerance");

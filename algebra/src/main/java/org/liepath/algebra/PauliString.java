@@ -49,6 +49,7 @@ public final class PauliString implements Comparable<PauliString> {
      * Parses letters I, X, Y, Z (upper or lower case), leftmost = qubit 0.
      *
      * @param letters the Pauli letters, one per qubit
+     * @return the Pauli string
      * @throws InvalidInputException SYNTAX naming the position of the first bad letter; EMPTY for ""
      */
     public static PauliString of(String letters) {

@@ -50,6 +50,7 @@ public final class PauliSum {
      * Parses the text form, e.g. {@code "0.5 XXI + YYI - 2 ZII"} or {@code "-1e-3*xz + .5 ZZ"}.
      *
      * @param text the text to parse
+     * @return the parsed sum
      * @throws InvalidInputException SYNTAX with the 0-based position of the first error; EMPTY for blank text;
      *                               NOT_FINITE for a coefficient that overflows a double; DIMENSION_MISMATCH if
      *                               strings of different lengths appear (naming the first offender)
@@ -92,7 +93,10 @@ public final class PauliSum {
         return c == 0 ? zero(p.qubits()) : new PauliSum(p.qubits(), new PauliString[]{p}, new double[]{c});
     }
 
-    /** @return the sum 1·P for the letters of {@code p}, e.g. {@code of("XZI")} */
+    /**
+     * @param p the Pauli letters of the string (coefficient 1)
+     * @return the sum 1·P for the letters of {@code p}, e.g. {@code of("XZI")}
+     */
     public static PauliSum of(String p) {
         return of(PauliString.of(p));
     }

@@ -62,6 +62,7 @@ public final class Subalgebras {
      *
      * @param basis the basis elements
      * @param maxSubsets the largest number of closed subsets allowed (positive)
+     * @return the closed subalgebras, one per closed subset
      */
     public static List<LieAlgebra> closedSubsets(List<Operator> basis, int maxSubsets) {
         Require.positive(maxSubsets, "maxSubsets");
@@ -102,6 +103,7 @@ public final class Subalgebras {
      * (For generators without the monomial-bracket property use {@link LieAlgebra#generatedBy}.)
      *
      * @param basis the basis elements
+     * @param chosen indices of the chosen basis elements
      * @return the smallest closed subset containing the chosen elements, as an algebra
      * @throws InvalidInputException as {@link #closedSubsets}, and OUT_OF_RANGE / EMPTY for the indices
      */
@@ -123,6 +125,7 @@ public final class Subalgebras {
      * The closure of a subset given as a bit mask (bit k = element k), as indices.
      *
      * @param basis the basis elements
+     * @param chosen indices of the chosen basis elements
      * @return the closure of a subset given as a bit mask (bit k = element k), as indices
      */
     public static int[] closureIndices(List<Operator> basis, int... chosen) {

@@ -228,6 +228,7 @@ public interface Drive {
      * @param t0 the start time
      * @param dt the step length
      * @param values the values
+     * @return the piecewise-constant drive
      */
     static Drive samples(double t0, double dt, double... values) {
         Require.finite(t0, "t0");

@@ -8,8 +8,11 @@ package org.liepath.core;
  */
 public class DriveException extends IllegalStateException {
     private static final long serialVersionUID = 1L;
+    /** The index of the Hamiltonian term whose drive failed. */
     private final int term;
+    /** The time at which the drive was evaluated. */
     private final double time;
+    /** The drive's name. */
     private final String driveName;
 
     /**

@@ -23,7 +23,10 @@ public final class HilbertSpace {
         this.total = total;
     }
 
-    /** @param dims the subsystem dimensions, each ≥ 1, product ≤ {@value #MAX_DIM} */
+    /**
+     * @param dims the subsystem dimensions, each ≥ 1, product ≤ {@value #MAX_DIM}
+     * @return the composite space
+     */
     public static HilbertSpace of(int... dims) {
         Require.nonNull(dims, "dims");
         if (dims.length == 0) {
@@ -195,6 +198,7 @@ public final class HilbertSpace {
      *
      * @param op         an operator of dimension Π d_s over the listed subsystems
      * @param subsystems distinct subsystem indices, at least one
+     * @return the operator on the whole space
      * @throws InvalidInputException for a null or wrongly sized operator, or indices that are missing, out of range
      *                               or repeated
      */

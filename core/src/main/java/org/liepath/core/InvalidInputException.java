@@ -41,7 +41,9 @@ public class InvalidInputException extends IllegalArgumentException {
         UNSUPPORTED
     }
 
+    /** Why the input was refused. */
     private final Reason reason;
+    /** The name of the refused argument. */
     private final String argument;
 
     /**

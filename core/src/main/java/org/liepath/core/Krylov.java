@@ -43,6 +43,7 @@ public final class Krylov {
      * @param t   time, finite (hbar = 1; negative runs backward)
      * @param psi state of the same dimension (need not be normalised)
      * @param tol relative error target, positive and finite (e.g. 1e-10)
+     * @return the vector exp(−i t H)|ψ⟩ with its error estimate
      * @throws InvalidInputException if an argument is null, h is not Hermitian, dimensions differ, t is not finite,
      *                               tol is not positive, or the step limit is reached (reason LIMIT_EXCEEDED)
      */
@@ -58,6 +59,8 @@ public final class Krylov {
      * @param t the time
      * @param psi the state
      * @param tol the tolerance (positive)
+     * @param m the Krylov dimension (≥ 1)
+     * @return the vector exp(−i t H)|ψ⟩ with its error estimate
      */
     public static Result expMinusI(Operator h, double t, StateVector psi, double tol, int m) {
         Require.nonNull(h, "h");
@@ -72,6 +75,7 @@ public final class Krylov {
      * @param t   time, finite
      * @param v   vector of the same dimension
      * @param tol relative error target, positive and finite
+     * @return the vector exp(t A) v with its error estimate
      * @throws InvalidInputException as for {@link #expMinusI(Operator, double, StateVector, double)} (without the
      *                               Hermiticity requirement)
      */
@@ -86,6 +90,8 @@ public final class Krylov {
      * @param t the time
      * @param v the vector
      * @param tol the tolerance (positive)
+     * @param m the Krylov dimension (≥ 1)
+     * @return the vector exp(t A) v with its error estimate
      */
     public static Result expAction(Operator a, double t, StateVector v, double tol, int m) {
         Require.nonNull(a, "a");

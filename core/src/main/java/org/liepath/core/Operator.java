@@ -131,6 +131,7 @@ public final class Operator {
     /**
      * A real diagonal operator with the given diagonal.
      *
+     * @param d the diagonal entries (finite)
      * @return a real diagonal operator with the given diagonal
      */
     public static Operator diagonal(double... d) {
@@ -167,6 +168,7 @@ public final class Operator {
     /**
      * The outer product |a⟩⟨b|.
      *
+     * @param a the ket |a⟩
      * @param b the other state
      * @return the outer product |a⟩⟨b|
      */
@@ -186,7 +188,12 @@ public final class Operator {
         return new Operator(n, r, im);
     }
 
-    /** Converts an EJML complex row-major matrix (copied). */
+    /**
+     * Converts an EJML complex row-major matrix (copied).
+     *
+     * @param m the EJML matrix (square, finite)
+     * @return the operator
+     */
     public static Operator fromEjml(ZMatrixRMaj m) {
         Require.nonNull(m, "m");
         if (m.numRows != m.numCols || m.numRows == 0) {
@@ -246,7 +253,12 @@ public final class Operator {
         return i * n + j;
     }
 
-    /** Copies the planar row-major entries into the caller's arrays (each of length ≥ n²). */
+    /**
+     * Copies the planar row-major entries into the caller's arrays (each of length ≥ n²).
+     *
+     * @param reOut output: the real parts (length ≥ n²)
+     * @param imOut output: the imaginary parts (length ≥ n²)
+     */
     public void copyTo(double[] reOut, double[] imOut) {
         Require.nonNull(reOut, "reOut");
         Require.nonNull(imOut, "imOut");
@@ -286,7 +298,11 @@ public final class Operator {
         return out;
     }
 
-    /** Converts to an EJML complex row-major matrix (a copy). */
+    /**
+     * Converts to an EJML complex row-major matrix (a copy).
+     *
+     * @return a new EJML matrix holding a copy of the entries
+     */
     public ZMatrixRMaj toEjml() {
         ZMatrixRMaj m = new ZMatrixRMaj(n, n);
         for (int k = 0; k < n * n; k++) {
@@ -593,6 +609,7 @@ public final class Operator {
      * result is unitary to rounding for any t.
      *
      * @param t the time
+     * @return exp(−i t H)
      * @throws InvalidInputException if this is not Hermitian (relative tolerance 1e-12) or t is not finite
      */
     public Operator expMinusI(double t) {
@@ -607,6 +624,7 @@ public final class Operator {
      * Throws unless this operator is Hermitian to a relative tolerance of 1e-12.
      *
      * @param name the name
+     * @return this operator
      */
     public Operator requireHermitian(String name) {
         double d = hermitianDefect();

@@ -40,7 +40,10 @@ public final class Pauli {
         return Operator.diagonal(1, -1);
     }
 
-    /** @return the 2×2 Pauli matrix for one letter I, X, Y or Z */
+    /**
+     * @param c the letter I, X, Y or Z
+     * @return the 2×2 Pauli matrix for one letter I, X, Y or Z
+     */
     public static Operator letter(char c) {
         switch (Character.toUpperCase(c)) {
             case 'I': return i();
@@ -55,6 +58,7 @@ public final class Pauli {
     /**
      * The dense Kronecker product of the letters of {@code s}, leftmost letter = qubit 0 = leftmost factor.
      *
+     * @param s the Pauli letters, leftmost = qubit 0
      * @return the dense Kronecker product of the letters of {@code s}, leftmost letter = qubit 0 = leftmost factor
      * @throws InvalidInputException for an empty string, a letter other than I/X/Y/Z (the message gives its
      *                               position), or more than {@value #MAX_QUBITS} letters

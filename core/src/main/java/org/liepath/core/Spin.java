@@ -26,6 +26,7 @@ public final class Spin {
 
     /**
      * @param j a positive integer or half-integer, at most {@value #MAX_J}
+     * @return the spin-j operators
      * @throws InvalidInputException if j is not a positive multiple of ½ or too large
      */
     public static Spin of(double j) {

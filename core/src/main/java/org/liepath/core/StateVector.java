@@ -75,6 +75,7 @@ public final class StateVector {
     /**
      * A real vector.
      *
+     * @param re the components
      * @return a real vector
      */
     public static StateVector real(double... re) {
@@ -121,7 +122,12 @@ public final class StateVector {
         return re[i] * re[i] + im[i] * im[i];
     }
 
-    /** Copies the components into the caller's arrays (length ≥ n). */
+    /**
+     * Copies the components into the caller's arrays (length ≥ n).
+     *
+     * @param reOut output: the real parts (length ≥ n)
+     * @param imOut output: the imaginary parts (length ≥ n)
+     */
     public void copyTo(double[] reOut, double[] imOut) {
         Require.nonNull(reOut, "reOut");
         Require.nonNull(imOut, "imOut");

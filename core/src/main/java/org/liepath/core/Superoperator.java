@@ -25,6 +25,7 @@ public final class Superoperator {
      * Wraps an n²×n² matrix in column-stacking convention.
      *
      * @param s the operator
+     * @return the superoperator with matrix s
      * @throws InvalidInputException if the matrix dimension is not a perfect square
      */
     public static Superoperator ofMatrix(Operator s) {

@@ -57,6 +57,7 @@ public final class BlockRiccati {
     /**
      * @param h     the Hamiltonian (dimension N ≥ 2)
      * @param split the size n of the first block, 1 ≤ n ≤ N − 1
+     * @return the block Riccati decomposition
      * @throws InvalidInputException NULL, or OUT_OF_RANGE for a split outside [1, N − 1]
      */
     public static BlockRiccati of(Hamiltonian h, int split) {

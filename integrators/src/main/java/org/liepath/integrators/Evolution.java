@@ -85,6 +85,7 @@ public final class Evolution {
      * the map (channel mode; ≥ 0 up to rounding for a completely positive map). Computed from the real symmetric
      * 2k×2k embedding [[Re, −Im], [Im, Re]] of the Hermitian part with Commons Math (each eigenvalue appears twice).
      *
+     * @return the smallest eigenvalue (negative values show a loss of positivity)
      * @throws IllegalStateException for a closed-system run or a failed run
      */
     public double minEigenvalue() {

@@ -289,6 +289,7 @@ public final class Evolve {
      * reaching it ends the run with STEP_LIMIT. Fixed-step runs take exactly their steps. Wei–Norman runs count
      * accepted steps of their coordinate integrator (summed over charts).
      *
+     * @param n the step limit (positive)
      * @return a copy with this setting
      */
     public Evolve maxSteps(long n) {
@@ -303,6 +304,7 @@ public final class Evolve {
     /**
      * Integrates.
      *
+     * @return the evolution: its status, result, trajectory and statistics
      * @throws InvalidInputException if no interval was given, a sample time lies outside it, or the scheme cannot
      *                               serve the problem (UNSUPPORTED: piecewise-exact stepping of drives that are not
      *                               piecewise constant, fixed steps with the reference or a Wei–Norman scheme, a

@@ -72,6 +72,8 @@ public final class Scheme {
 
     /**
      * Exponential midpoint rule X ← exp(h A(t + h/2)) X: order 2, one evaluation, one exponential; time symmetric.
+     *
+     * @return the scheme
      */
     public static Scheme exponentialMidpoint() {
         return MIDPOINT;
@@ -81,6 +83,8 @@ public final class Scheme {
      * Fourth-order Magnus integrator on two Gauss–Legendre nodes with one commutator,
      * Ω = (h/2)(A_1 + A_2) − (√3/12) h² [A_1, A_2] (A. Iserles, S.P. Nørsett, Phil. Trans. R. Soc. A 357 (1999)
      * 983–1019; S. Blanes, F. Casas, J.A. Oteo, J. Ros, Phys. Rep. 470 (2009) 151–238).
+     *
+     * @return the scheme
      */
     public static Scheme magnus4() {
         return MAGNUS4;
@@ -89,6 +93,8 @@ public final class Scheme {
     /**
      * Sixth-order Magnus integrator on three Gauss nodes with three commutators (S. Blanes, F. Casas, J. Ros, BIT 40
      * (2000) 434–450).
+     *
+     * @return the scheme
      */
     public static Scheme magnus6() {
         return MAGNUS6;
@@ -97,6 +103,8 @@ public final class Scheme {
     /**
      * Eighth-order Magnus integrator on four Gauss nodes with ten commutators (S. Blanes, F. Casas, J. Ros, BIT 40
      * (2000) 434–450, in the form built on univariate integrals).
+     *
+     * @return the scheme
      */
     public static Scheme magnus8() {
         return MAGNUS8;
@@ -105,6 +113,8 @@ public final class Scheme {
     /**
      * CF4:2, the fourth-order commutator-free scheme with two exponentials on two Gauss nodes (S. Blanes, P.C. Moan,
      * Appl. Numer. Math. 56 (2006) 1519–1537; M. Thalhammer, SIAM J. Numer. Anal. 44 (2006) 851–864).
+     *
+     * @return the scheme
      */
     public static Scheme commutatorFree4() {
         return CF4;
@@ -115,6 +125,8 @@ public final class Scheme {
      * A. Alvermann, H. Fehske, J. Comput. Phys. 230 (2011) 5930–5956. <b>Its coefficient values are from memory</b>:
      * they are verified to give order 4 (with an error constant far below CF4:2's), but were not checked against the
      * paper's table. The default scheme of {@link Evolve}.
+     *
+     * @return the scheme
      */
     public static Scheme commutatorFree4Opt() {
         return CF4_OPT;
@@ -135,6 +147,8 @@ public final class Scheme {
      * Exact stepping for piecewise-constant Hamiltonians: one exponential exp(−i Δt H) per constant segment (long
      * segments are cut into a few pieces to keep the exponential unitary to rounding). {@link #order()} is
      * {@link Integer#MAX_VALUE} (exact). A run refuses a Hamiltonian whose drives are not all piecewise constant.
+     *
+     * @return the scheme
      */
     public static Scheme piecewiseExact() {
         return PIECEWISE;
@@ -159,6 +173,7 @@ public final class Scheme {
      * is set by the tolerance of the chart's own integrator).
      *
      * @param chart the Wei–Norman chart
+     * @return the scheme
      */
     public static Scheme weiNorman(WeiNorman chart) {
         Require.nonNull(chart, "chart");

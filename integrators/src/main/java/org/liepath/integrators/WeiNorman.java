@@ -183,6 +183,7 @@ public final class WeiNorman {
     /**
      * @param i the index
      * @param j the index
+     * @param l the index of the result component
      * @return the structure constant c_{ij}^l with [X_i, X_j] = Σ_l c_{ij}^l X_l (0-based indices)
      */
     public Complex structureConstant(int i, int j, int l) {
@@ -205,6 +206,8 @@ public final class WeiNorman {
     /**
      * Coordinates of an operator in the complex span of the basis.
      *
+     * @param y the operator, in the complex span of the basis
+     * @return the coordinates c_k with y = Σ c_k X_k
      * @throws InvalidInputException DIMENSION_MISMATCH, or UNSUPPORTED if y is not in the span
      */
     public Complex[] coordinates(Operator y) {
@@ -244,6 +247,7 @@ public final class WeiNorman {
      * Padé scaling and squaring; m − 1 matrix products.
      *
      * @param g the coordinates g_1 … g_m
+     * @return U in the chart's own representation
      * @throws InvalidInputException NULL, DIMENSION_MISMATCH (length ≠ m) or NOT_FINITE
      */
     public Operator propagator(Complex[] g) {

@@ -128,6 +128,7 @@ public final class WeiNormanEquations {
      *
      * @param t the time
      * @param g the coordinates g_1 … g_m
+     * @return the derivatives ġ_1 … ġ_m
      * @throws InvalidInputException for a wrong length or non-finite entries; OUT_OF_RANGE where Γ(g) is singular
      */
     public Complex[] derivative(double t, Complex[] g) {

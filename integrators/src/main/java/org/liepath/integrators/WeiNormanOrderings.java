@@ -72,6 +72,7 @@ public final class WeiNormanOrderings {
      * Proposals for the basis of an algebra.
      *
      * @param algebra the Lie algebra
+     * @return the proposals, best first
      */
     public static List<Proposal> propose(LieAlgebra algebra) {
         Require.nonNull(algebra, "algebra");
@@ -82,6 +83,7 @@ public final class WeiNormanOrderings {
      * Proposals for a basis, best first (distinct orderings; the given order is always among them).
      *
      * @param basis the basis elements
+     * @return the proposals, best first
      * @throws InvalidInputException as {@link WeiNorman#of(List)} for a basis that is not closed or not independent
      */
     public static List<Proposal> propose(List<Operator> basis) {

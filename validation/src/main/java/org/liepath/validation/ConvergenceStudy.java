@@ -73,6 +73,7 @@ public final class ConvergenceStudy {
      * @param label     a name for tables and plots
      * @param method    steps ↦ result (e.g. a propagator over a fixed interval); called once per level
      * @param reference the exact or high-accuracy result
+     * @return a builder for the study
      */
     public static Builder of(String label, IntFunction<Operator> method, Operator reference) {
         // a null result from the method marks a failed run (unusable point)
@@ -84,7 +85,9 @@ public final class ConvergenceStudy {
      * As {@link #of(String, IntFunction, Operator)} with a method that also reports its evaluation count.
      *
      * @param label the label
+     * @param method the method: from a step count to its result and evaluation count
      * @param reference the reference result
+     * @return a builder for the study
      */
     public static Builder ofOutcomes(String label, IntFunction<Outcome> method, Operator reference) {
         Require.nonNull(method, "method");
@@ -100,6 +103,7 @@ public final class ConvergenceStudy {
      * @param t0 the start time
      * @param t1 the end time
      * @param scheme the scheme
+     * @return a builder for the study
      */
     public static Builder of(Hamiltonian h, double t0, double t1, Scheme scheme) {
         Require.nonNull(h, "h");
@@ -116,6 +120,7 @@ public final class ConvergenceStudy {
      * @param t1 the end time
      * @param scheme the scheme
      * @param reference the reference result
+     * @return a builder for the study
      */
     public static Builder of(Hamiltonian h, double t0, double t1, Scheme scheme, Operator reference) {
         Require.nonNull(h, "h");

@@ -54,6 +54,7 @@ public final class CrossCheck {
      * Starts a cross-check of the propagator of a Hamiltonian.
      *
      * @param h the Hamiltonian
+     * @return a builder for the cross-check
      */
     public static Builder of(Hamiltonian h) {
         return new Builder(Require.nonNull(h, "h"), null);
@@ -63,6 +64,7 @@ public final class CrossCheck {
      * Starts a cross-check of the dynamical map (channel) of a GKLS generator.
      *
      * @param l the GKLS generator
+     * @return a builder for the cross-check
      */
     public static Builder of(Lindbladian l) {
         return new Builder(null, Require.nonNull(l, "l"));
@@ -144,6 +146,7 @@ public final class CrossCheck {
          * Uses an exact result instead of the reference integrator: the propagator (Hamiltonian) or the channel's
          * n²×n² matrix in column stacking (Lindbladian).
          *
+         * @param exact the exact (or reference) result
          * @return this builder
          */
         public Builder reference(Operator exact) {
@@ -245,7 +248,11 @@ public final class CrossCheck {
         return table().markdown();
     }
 
-    /** Writes {@link #toCsv()} to a file (UTF-8), creating parent directories. */
+    /**
+     * Writes {@link #toCsv()} to a file (UTF-8), creating parent directories.
+     *
+     * @param file the CSV file to write
+     */
     public void writeCsv(Path file) {
         Require.nonNull(file, "file");
         try {

@@ -150,6 +150,7 @@ public final class Demo {
      *
      * @param folder the report folder (created if needed)
      * @param log    receives one line per stage and progress report (pass {@code s -> { }} for silence)
+     * @return the written report and its headline figures
      */
     public static Outcome run(Path folder, Consumer<String> log) {
         Require.nonNull(folder, "folder");

@@ -89,6 +89,7 @@ public final class Fidelity {
      *
      * @param target the target unitary
      * @param channel the channel (a superoperator, column stacking)
+     * @return the entanglement fidelity F_e
      */
     public static double entanglement(Operator target, Superoperator channel) {
         requireUnitaryTarget(target);
@@ -137,6 +138,7 @@ public final class Fidelity {
      *
      * @param rho the density matrix
      * @param sigma the second density matrix
+     * @return the fidelity, in [0, 1]
      * @throws InvalidInputException if either is not a density matrix within {@link #DENSITY_TOLERANCE}
      */
     public static double state(Operator rho, Operator sigma) {
@@ -208,6 +210,7 @@ public final class Fidelity {
      * are symmetrised, (ρ + ρ†)/2, so that integration round-off in the Hermitian part does not count as misuse.
      *
      * @param trajectory the trajectory
+     * @return the purity of each sample, in order
      * @throws IllegalStateException if the trajectory does not hold densities (from {@link Trajectory#density})
      */
     public static double[] purity(Trajectory trajectory) {
@@ -218,6 +221,7 @@ public final class Fidelity {
      * Entropy of each sample of a density-mode trajectory, as {@link #purity(Trajectory)}.
      *
      * @param trajectory the trajectory
+     * @return the entropy of each sample, in order
      */
     public static double[] entropy(Trajectory trajectory) {
         return entropy(densities(trajectory));

@@ -65,6 +65,7 @@ public final class Report {
      * Starts a report with a title (the summary's first heading).
      *
      * @param title the title
+     * @return a builder for the report
      */
     public static Builder builder(String title) {
         return new Builder(Require.nonNull(title, "title"));
@@ -77,6 +78,7 @@ public final class Report {
      * @param title the title
      * @param xLabel the label of the horizontal axis
      * @param yLabel the label of the vertical axis
+     * @return a builder for the plot
      */
     public static Plot plot(String fileName, String title, String xLabel, String yLabel) {
         Require.nonNull(fileName, "fileName");
@@ -126,6 +128,8 @@ public final class Report {
         /**
          * Image size in pixels (default 800 × 500; each 100 … 4000).
          *
+         * @param width the width in pixels
+         * @param height the height in pixels
          * @return a copy with this setting
          */
         public Plot size(int width, int height) {
@@ -142,6 +146,8 @@ public final class Report {
          * Adds a series drawn as a line.
          *
          * @param name the name
+         * @param x the abscissae
+         * @param y the ordinates (same length as x)
          * @return a copy with this setting
          */
         public Plot line(String name, double[] x, double[] y) {
@@ -152,6 +158,8 @@ public final class Report {
          * Adds a series drawn as a line with markers at the data points.
          *
          * @param name the name
+         * @param x the abscissae
+         * @param y the ordinates (same length as x)
          * @return a copy with this setting
          */
         public Plot points(String name, double[] x, double[] y) {
