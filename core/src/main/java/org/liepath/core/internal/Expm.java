@@ -357,11 +357,11 @@ public final class Expm {
                 cshr = 1 + cm1r;
                 cshi = cm1i;
             }
-            double em = Math.exp(mur), er = em * Math.cos(mui), ei = em * Math.sin(mui);
+            double em = Math.exp(mur), cm = Math.cos(mui), er = em * cm, ei = em * Math.sin(mui);
             if (increment) {
                 // e^μ cosh δ − 1 = e^μ (cosh δ − 1) + (e^μ − 1), each part formed without cancellation
                 double s2 = Math.sin(0.5 * mui);
-                chr = er * cm1r - ei * cm1i + Math.expm1(mur) * Math.cos(mui) - 2 * s2 * s2;
+                chr = er * cm1r - ei * cm1i + Math.expm1(mur) * cm - 2 * s2 * s2;
                 chi = er * cm1i + ei * cm1r + ei;
             } else {
                 chr = er * cshr - ei * cshi;
