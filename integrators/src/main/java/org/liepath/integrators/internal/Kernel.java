@@ -222,6 +222,12 @@ public abstract class Kernel {
      */
     protected final void exponential(double scale, double[] omR, double[] omI, double[] outR, double[] outI) {
         exponentials++;
+        if (m == 2) {
+            // the closed form is exact to rounding for every 2×2 exponent (unitary for anti-Hermitian ones at any
+            // norm), so neither the norm test nor the workspace copy is needed
+            Expm.exp2(scale, 0.0, omR, omI, outR, outI);
+            return;
+        }
         if (hexp == null || Math.abs(scale) * Dense.norm1(m, omR, omI) <= PADE_LIMIT) {
             expm.compute(scale, omR, omI, outR, outI);
             return;
