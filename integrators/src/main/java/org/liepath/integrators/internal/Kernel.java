@@ -194,15 +194,45 @@ public abstract class Kernel {
     /** Krylov accuracy per exponential, relative to ‖x‖: far below any scheme's local error at useful tolerances. */
     static final double KRYLOV_TOL = 1e-14;
 
-    /** X ← exp(W) X, with W in (wr, wi) (overwritten by nothing; er/ei and sr/si used as scratch). */
+    /**
+     * X ← exp(W) X, with W in (wr, wi) (overwritten by nothing; er/ei and sr/si used as scratch), applied in
+     * increment form X ← X + D X with D = exp(W) − I from {@link #increment}: D carries rounding errors of order
+     * u·‖W‖ instead of the u of exp(W)'s order-one entries, so the per-step unitarity (or trace) defect no longer
+     * repeats coherently from step to step and long runs drift like a random walk of the state's own rounding.
+     */
     protected final void expApply(double[] omR, double[] omI, int p, double[] xr, double[] xi) {
         if (p == 1 && krylov != null && krylovApply(omR, omI, xr, xi)) {
             return;
         }
-        exponential(1.0, omR, omI, er, ei);
-        mulLeft(p, er, ei, xr, xi, sr, si);
-        System.arraycopy(sr, 0, xr, 0, m * p);
-        System.arraycopy(si, 0, xi, 0, m * p);
+        increment(1.0, omR, omI, er, ei);
+        addLeft(p, er, ei, xr, xi);
+    }
+
+    /** X ← X + D X for D m×m (planar) and X m×p, using (sr, si) as scratch. */
+    protected final void addLeft(int p, double[] dr, double[] di, double[] xr, double[] xi) {
+        int len = m * p;
+        mulLeft(p, dr, di, xr, xi, sr, si);
+        for (int q = 0; q < len; q++) {
+            xr[q] += sr[q];
+            xi[q] += si[q];
+        }
+    }
+
+    /**
+     * out = exp(scale·Ω) − I: Padé in increment form ({@link Expm#computeIncrement}) up to {@link #PADE_LIMIT};
+     * beyond it the increment is of order one anyway, so the eigen route's exponential minus I serves. Outputs must
+     * not alias inputs.
+     */
+    protected final void increment(double scale, double[] omR, double[] omI, double[] outR, double[] outI) {
+        if (hexp == null || Math.abs(scale) * Dense.norm1(m, omR, omI) <= PADE_LIMIT) {
+            exponentials++;
+            expm.computeIncrement(scale, omR, omI, outR, outI);
+            return;
+        }
+        exponential(scale, omR, omI, outR, outI);
+        for (int i = 0; i < m; i++) {
+            outR[i * m + i] -= 1;
+        }
     }
 
     /**
