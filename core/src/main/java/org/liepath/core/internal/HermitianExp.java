@@ -10,8 +10,10 @@ package org.liepath.core.internal;
  *   <li>accuracy: over 200 random Hermitian H of size 1…40 and |t| from 0.01 to 1000, the worst unitarity defect
  *       ‖U†U − I‖_F was 11·n·u for the eigen route and 1800·n·u for scaling and squaring, whose defect grows with the
  *       number of squarings (log₂‖tH‖₁); the eigen route's defect does not depend on t at all;</li>
- *   <li>speed ({@code HermitianExpBenchmark}, t = 1, unit-variance entries): about equal at n = 3–4, eigen 1.5–2×
- *       faster at n = 8–16 and 1.4–6× at n = 64–256 (the Padé route needs more squarings as ‖tH‖ grows with n);</li>
+ *   <li>speed (t = 1, unit-variance entries, so ‖tH‖₁ grows with n): in an interleaved timing loop the two are
+ *       about equal at n = 3–4 and the eigen route is 1.3× faster at n = 5 and 1.7× at n = 8; three JMH runs of
+ *       {@code HermitianExpBenchmark} on the loaded machine mostly agree (eigen 1.2–6× faster for n = 8–64) but
+ *       scatter too much to rank the two at n = 4 or 256;</li>
  *   <li>n = 1 and n = 2 use closed forms ({@link Expm#exp2}), exactly unitary to rounding and ~10× cheaper.</li>
  * </ul>
  * So the eigen route is used for every n ≥ 3 and every t. Cost about 25n³ flops for the decomposition plus 8n³ for
