@@ -28,9 +28,17 @@ public final class Hamiltonian {
         this.drives = drives;
     }
 
-    /** @return a builder for operators of dimension dim */
+    /**
+     * @param dim the dimension of the operators, 1 … {@link Operator#MAX_DIM}
+     * @return a builder for operators of dimension dim
+     * @throws InvalidInputException for a dimension outside that range (LIMIT_EXCEEDED above it)
+     */
     public static Builder builder(int dim) {
         Require.positive(dim, "dim");
+        if (dim > Operator.MAX_DIM) {
+            throw InvalidInputException.of(InvalidInputException.Reason.LIMIT_EXCEEDED, "dim",
+                    "a dimension ≤ " + Operator.MAX_DIM, dim);
+        }
         return new Builder(dim);
     }
 

@@ -25,9 +25,26 @@ public final class StateVector {
         this.im = im;
     }
 
-    /** The basis vector |k⟩ of C^n. */
+    /**
+     * Largest dimension of a state vector: that of vec(ρ) for the largest {@link Operator} ({@link Operator#MAX_DIM}²),
+     * which is also below every JVM's array-length limit.
+     */
+    public static final int MAX_DIM = Operator.MAX_DIM * Operator.MAX_DIM;
+
+    /**
+     * The basis vector |k⟩ of C^n.
+     *
+     * @param n the dimension, 1 … {@link #MAX_DIM}
+     * @param k the index of the basis vector, 0 … n − 1
+     * @return |k⟩
+     * @throws InvalidInputException for n &lt; 1, LIMIT_EXCEEDED for n &gt; MAX_DIM, OUT_OF_RANGE for k outside
+     *                               0 … n − 1
+     */
     public static StateVector basis(int n, int k) {
         Require.positive(n, "n");
+        if (n > MAX_DIM) {
+            throw InvalidInputException.of(Reason.LIMIT_EXCEEDED, "n", "a dimension ≤ " + MAX_DIM, n);
+        }
         Require.index(k, n, "k");
         double[] r = new double[n];
         r[k] = 1;

@@ -251,7 +251,8 @@ public final class Evolve {
 
     /**
      * The step limit of adaptive runs (attempted steps, accepted or rejected; default {@value #DEFAULT_MAX_STEPS});
-     * reaching it ends the run with STEP_LIMIT. Fixed-step runs take exactly their steps.
+     * reaching it ends the run with STEP_LIMIT. Fixed-step runs take exactly their steps. Wei–Norman runs count
+     * accepted steps of their coordinate integrator (summed over charts).
      */
     public Evolve maxSteps(long n) {
         if (n <= 0) {
@@ -372,11 +373,19 @@ public final class Evolve {
         }
         String[] monitorFailure = {null};
         ProgressListener user = monitor;
+        long limit = maxSteps;
+        boolean[] limitReached = {false};
         ProgressListener guarded = new ProgressListener() {
             private boolean alive = true;
 
             @Override
             public boolean onProgress(double fraction, long count) {
+                // the chart integrator reports every accepted step: the step limit counts those (a stop request at
+                // the final step, fraction 1, would be moot)
+                if (count >= limit && fraction < 1) {
+                    limitReached[0] = true;
+                    return false;
+                }
                 if (!alive) {
                     return true;
                 }
@@ -411,10 +420,12 @@ public final class Evolve {
                     null);
         }
         long nanos = System.nanoTime() - start;
-        Status.Kind kind = cr.cancelled ? Status.Kind.CANCELLED
+        Status.Kind kind = cr.cancelled ? (limitReached[0] ? Status.Kind.STEP_LIMIT : Status.Kind.CANCELLED)
                 : cr.failure != null || cr.propagator == null ? Status.Kind.FAILED : Status.Kind.SUCCESS;
         double reached = cr.times.length > 0 ? cr.times[cr.times.length - 1] : t0;
-        String msg = cr.cancelled ? "cancelled by the progress listener at t = " + reached
+        String msg = kind == Status.Kind.STEP_LIMIT ? "step limit of " + limit + " accepted steps reached before t = "
+                + t1
+                : cr.cancelled ? "cancelled by the progress listener at t = " + reached
                 : cr.failure != null ? cr.failure : cr.propagator == null ? "no propagator returned" : "";
         Status st = status(kind, msg, monitorFailure[0], null, kind == Status.Kind.SUCCESS ? t1 : reached);
         Stats stats = new Stats(cr.steps, 0, cr.evaluations, 0, 0, cr.charts, nanos, monitorFailure[0], null);
@@ -436,12 +447,38 @@ public final class Evolve {
                 fr = u.reArray();
                 fi = u.imArray();
             }
+        }
+        // the trajectory: t0, every sample time the chart recorded (re-anchoring already composed in), the end
+        addSample(times, re, im, t0, Operator.identity(dim), psi);
+        if (cr.propagators != null && cr.propagators.size() == cr.times.length) {
+            for (int k = 0; k < cr.times.length; k++) {
+                if (cr.propagators.get(k) != null && cr.times[k] != t0 && !(k == cr.times.length - 1 && fr != null)) {
+                    addSample(times, re, im, cr.times[k], cr.propagators.get(k), psi);
+                }
+            }
+        }
+        if (fr != null) {
             times.add(kind == Status.Kind.SUCCESS ? t1 : reached);
             re.add(fr);
             im.add(fi);
         }
         Trajectory traj = new Trajectory(mode, dim, times, re, im);
         return new Evolution(s, st, mode, dim, fr, fi, traj, stats, Double.NaN, coords);
+    }
+
+    private static void addSample(List<Double> times, List<double[]> re, List<double[]> im, double t, Operator u,
+                                  StateVector psi) {
+        times.add(t);
+        if (psi != null) {
+            StateVector out = psi.apply(u);
+            double[] r = new double[out.dim()], i = new double[out.dim()];
+            out.copyTo(r, i);
+            re.add(r);
+            im.add(i);
+        } else {
+            re.add(u.reArray());
+            im.add(u.imArray());
+        }
     }
 
     @Override

@@ -298,7 +298,8 @@ public final class WeiNormanEquations {
         if (latex) {
             return "c_{" + (j + 1) + "}(t)";
         }
-        return name.matches("[-+]?[0-9.eE+-]+") ? name : "(" + name + ")";
+        // a bare number reads as a factor only when it is non-negative ("2 0.5"); "2 -0.02" would read as a difference
+        return name.matches("\\+?[0-9][0-9.eE+-]*") ? name : "(" + name + ")";
     }
 
     @Override
