@@ -357,11 +357,13 @@ public final class Expm {
                 cshr = 1 + cm1r;
                 cshi = cm1i;
             }
-            double em = Math.exp(mur), cm = Math.cos(mui), er = em * cm, ei = em * Math.sin(mui);
+            double em = Math.exp(mur), cm = Math.cos(mui), sm = Math.sin(mui), er = em * cm, ei = em * sm;
             if (increment) {
-                // e^μ cosh δ − 1 = e^μ (cosh δ − 1) + (e^μ − 1), each part formed without cancellation
-                double s2 = Math.sin(0.5 * mui);
-                chr = er * cm1r - ei * cm1i + Math.expm1(mur) * cm - 2 * s2 * s2;
+                // e^μ cosh δ − 1 = e^μ (cosh δ − 1) + (e^μ − 1), each part formed without cancellation:
+                // Re(e^μ − 1) = expm1(Re μ) cos(Im μ) + (cos(Im μ) − 1), and cos b − 1 = −sin²b / (1 + cos b)
+                // where cos b > 0 (no cancellation either way); Re μ = 0 for Hamiltonians, so expm1 is skipped
+                double cosm1 = cm > 0 ? -sm * sm / (1 + cm) : cm - 1;
+                chr = er * cm1r - ei * cm1i + (mur == 0 ? cosm1 : Math.expm1(mur) * cm + cosm1);
                 chi = er * cm1i + ei * cm1r + ei;
             } else {
                 chr = er * cshr - ei * cshi;

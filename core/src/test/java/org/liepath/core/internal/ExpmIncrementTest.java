@@ -64,6 +64,18 @@ class ExpmIncrementTest {
         int n = 1 + r.nextInt(8);
         double norm = Math.pow(10, -8 + 5 * r.nextDouble());
         double[][] a = random(r, n, norm);
+        if (r.nextBoolean()) {
+            // anti-Hermitian half of the cases (a Hamiltonian step −i·dt·H: real diagonal exactly zero)
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j <= i; j++) {
+                    double re = 0.5 * (a[0][i * n + j] - a[0][j * n + i]), im = 0.5 * (a[1][i * n + j] + a[1][j * n + i]);
+                    a[0][i * n + j] = re;
+                    a[0][j * n + i] = -re;
+                    a[1][i * n + j] = im;
+                    a[1][j * n + i] = im;
+                }
+            }
+        }
         int len = n * n;
         double[] sr = a[0].clone(), si = a[1].clone(), pr = a[0].clone(), pi = a[1].clone();
         double[] tr = new double[len], ti = new double[len];
