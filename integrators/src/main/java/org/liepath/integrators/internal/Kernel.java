@@ -22,6 +22,8 @@ public abstract class Kernel {
     /** Eigen-based exp(−iτK) for anti-Hermitian exponents (Hamiltonian systems), else null. */
     protected final HermitianExp hexp;
     private final double[] kr, ki;
+    /** Whether every real combination of generators (and so every commutator operand) is anti-Hermitian. */
+    private final boolean skew;
     /** Krylov action of the exponential for vector states of large dimension, else null. */
     private final KrylovWorkspace krylov;
     private final double[] vr, vi;
@@ -46,6 +48,7 @@ public abstract class Kernel {
         int len = m * m;
         expm = new Expm(m);
         hexp = sys.skewHermitian ? new HermitianExp(m) : null;
+        skew = sys.skewHermitian;
         kr = sys.skewHermitian ? new double[len] : null;
         ki = sys.skewHermitian ? new double[len] : null;
         krylov = m >= KRYLOV_MIN_DIM ? new KrylovWorkspace(m, KRYLOV_DIM) : null;
@@ -249,6 +252,12 @@ public abstract class Kernel {
      */
     protected final void exponential(double scale, double[] omR, double[] omI, double[] outR, double[] outI) {
         exponentials++;
+        if (m == 2) {
+            // the closed form is exact to rounding for every 2×2 exponent (unitary for anti-Hermitian ones at any
+            // norm), so neither the norm test nor the workspace copy is needed
+            Expm.exp2(scale, 0.0, omR, omI, outR, outI);
+            return;
+        }
         if (hexp == null || Math.abs(scale) * Dense.norm1(m, omR, omI) <= PADE_LIMIT) {
             expm.compute(scale, omR, omI, outR, outI);
             return;
@@ -288,8 +297,19 @@ public abstract class Kernel {
         return true;
     }
 
-    /** (yr, yi) = E X for E m×m and X m×p; outputs must not alias inputs. */
+    /**
+     * (yr, yi) = E X for E m×m and X m×p; outputs must not alias inputs. A square X goes through core's product
+     * kernel (unrolled for m ≤ 4, paired k-rows otherwise); a vector through the matrix–vector kernel.
+     */
     protected final void mulLeft(int p, double[] ar, double[] ai, double[] xr, double[] xi, double[] yr, double[] yi) {
+        if (p == m) {
+            Dense.mul(m, ar, ai, xr, xi, yr, yi);
+            return;
+        }
+        if (p == 1) {
+            Dense.mulVec(m, ar, ai, xr, xi, yr, yi);
+            return;
+        }
         int len = m * p;
         Arrays.fill(yr, 0, len, 0.0);
         Arrays.fill(yi, 0, len, 0.0);
@@ -310,8 +330,32 @@ public abstract class Kernel {
         }
     }
 
-    /** (cr, ci) = [A, B] = AB − BA using (sr, si) as scratch; outputs must not alias inputs. */
+    /**
+     * (cr, ci) = [A, B] = AB − BA using (sr, si) as scratch; outputs must not alias inputs.
+     *
+     * <p>For a Hamiltonian system every operand is anti-Hermitian (real combinations of −iH_k and their commutators
+     * stay in the Lie algebra u(n)), so BA = (A†B†)† = (AB)† and [A, B] = P − P† with P = AB: one product instead of
+     * two, and the result is anti-Hermitian exactly in floating point.
+     */
     protected final void commutator(double[] ar, double[] ai, double[] br, double[] bi, double[] cr, double[] ci) {
+        commutators++;
+        if (skew) {
+            Dense.mul(m, ar, ai, br, bi, sr, si);
+            for (int i = 0; i < m; i++) {
+                int ii = i * m + i;
+                cr[ii] = 0.0;
+                ci[ii] = 2 * si[ii];
+                for (int j = i + 1; j < m; j++) {
+                    int ij = i * m + j, ji = j * m + i;
+                    double re = sr[ij] - sr[ji], im = si[ij] + si[ji];
+                    cr[ij] = re;
+                    ci[ij] = im;
+                    cr[ji] = -re;
+                    ci[ji] = im;
+                }
+            }
+            return;
+        }
         mulLeft(m, ar, ai, br, bi, cr, ci);
         mulLeft(m, br, bi, ar, ai, sr, si);
         int len = m * m;
@@ -319,7 +363,6 @@ public abstract class Kernel {
             cr[q] -= sr[q];
             ci[q] -= si[q];
         }
-        commutators++;
     }
 
     /** out = a X + b Y (planar m×m); out may alias X or Y. */
