@@ -22,6 +22,8 @@ public abstract class Kernel {
     /** Eigen-based exp(−iτK) for anti-Hermitian exponents (Hamiltonian systems), else null. */
     protected final HermitianExp hexp;
     private final double[] kr, ki;
+    /** Whether every real combination of generators (and so every commutator operand) is anti-Hermitian. */
+    private final boolean skew;
     /** Krylov action of the exponential for vector states of large dimension, else null. */
     private final KrylovWorkspace krylov;
     private final double[] vr, vi;
@@ -46,6 +48,7 @@ public abstract class Kernel {
         int len = m * m;
         expm = new Expm(m);
         hexp = sys.skewHermitian ? new HermitianExp(m) : null;
+        skew = sys.skewHermitian;
         kr = sys.skewHermitian ? new double[len] : null;
         ki = sys.skewHermitian ? new double[len] : null;
         krylov = m >= KRYLOV_MIN_DIM ? new KrylovWorkspace(m, KRYLOV_DIM) : null;
@@ -191,15 +194,45 @@ public abstract class Kernel {
     /** Krylov accuracy per exponential, relative to ‖x‖: far below any scheme's local error at useful tolerances. */
     static final double KRYLOV_TOL = 1e-14;
 
-    /** X ← exp(W) X, with W in (wr, wi) (overwritten by nothing; er/ei and sr/si used as scratch). */
+    /**
+     * X ← exp(W) X, with W in (wr, wi) (overwritten by nothing; er/ei and sr/si used as scratch), applied in
+     * increment form X ← X + D X with D = exp(W) − I from {@link #increment}: D carries rounding errors of order
+     * u·‖W‖ instead of the u of exp(W)'s order-one entries, so the per-step unitarity (or trace) defect no longer
+     * repeats coherently from step to step and long runs drift like a random walk of the state's own rounding.
+     */
     protected final void expApply(double[] omR, double[] omI, int p, double[] xr, double[] xi) {
         if (p == 1 && krylov != null && krylovApply(omR, omI, xr, xi)) {
             return;
         }
-        exponential(1.0, omR, omI, er, ei);
-        mulLeft(p, er, ei, xr, xi, sr, si);
-        System.arraycopy(sr, 0, xr, 0, m * p);
-        System.arraycopy(si, 0, xi, 0, m * p);
+        increment(1.0, omR, omI, er, ei);
+        addLeft(p, er, ei, xr, xi);
+    }
+
+    /** X ← X + D X for D m×m (planar) and X m×p, using (sr, si) as scratch. */
+    protected final void addLeft(int p, double[] dr, double[] di, double[] xr, double[] xi) {
+        int len = m * p;
+        mulLeft(p, dr, di, xr, xi, sr, si);
+        for (int q = 0; q < len; q++) {
+            xr[q] += sr[q];
+            xi[q] += si[q];
+        }
+    }
+
+    /**
+     * out = exp(scale·Ω) − I: Padé in increment form ({@link Expm#computeIncrement}) up to {@link #PADE_LIMIT};
+     * beyond it the increment is of order one anyway, so the eigen route's exponential minus I serves. Outputs must
+     * not alias inputs.
+     */
+    protected final void increment(double scale, double[] omR, double[] omI, double[] outR, double[] outI) {
+        if (hexp == null || Math.abs(scale) * Dense.norm1(m, omR, omI) <= PADE_LIMIT) {
+            exponentials++;
+            expm.computeIncrement(scale, omR, omI, outR, outI);
+            return;
+        }
+        exponential(scale, omR, omI, outR, outI);
+        for (int i = 0; i < m; i++) {
+            outR[i * m + i] -= 1;
+        }
     }
 
     /**
@@ -219,6 +252,12 @@ public abstract class Kernel {
      */
     protected final void exponential(double scale, double[] omR, double[] omI, double[] outR, double[] outI) {
         exponentials++;
+        if (m == 2) {
+            // the closed form is exact to rounding for every 2×2 exponent (unitary for anti-Hermitian ones at any
+            // norm), so neither the norm test nor the workspace copy is needed
+            Expm.exp2(scale, 0.0, omR, omI, outR, outI);
+            return;
+        }
         if (hexp == null || Math.abs(scale) * Dense.norm1(m, omR, omI) <= PADE_LIMIT) {
             expm.compute(scale, omR, omI, outR, outI);
             return;
@@ -258,8 +297,19 @@ public abstract class Kernel {
         return true;
     }
 
-    /** (yr, yi) = E X for E m×m and X m×p; outputs must not alias inputs. */
+    /**
+     * (yr, yi) = E X for E m×m and X m×p; outputs must not alias inputs. A square X goes through core's product
+     * kernel (unrolled for m ≤ 4, paired k-rows otherwise); a vector through the matrix–vector kernel.
+     */
     protected final void mulLeft(int p, double[] ar, double[] ai, double[] xr, double[] xi, double[] yr, double[] yi) {
+        if (p == m) {
+            Dense.mul(m, ar, ai, xr, xi, yr, yi);
+            return;
+        }
+        if (p == 1) {
+            Dense.mulVec(m, ar, ai, xr, xi, yr, yi);
+            return;
+        }
         int len = m * p;
         Arrays.fill(yr, 0, len, 0.0);
         Arrays.fill(yi, 0, len, 0.0);
@@ -280,8 +330,32 @@ public abstract class Kernel {
         }
     }
 
-    /** (cr, ci) = [A, B] = AB − BA using (sr, si) as scratch; outputs must not alias inputs. */
+    /**
+     * (cr, ci) = [A, B] = AB − BA using (sr, si) as scratch; outputs must not alias inputs.
+     *
+     * <p>For a Hamiltonian system every operand is anti-Hermitian (real combinations of −iH_k and their commutators
+     * stay in the Lie algebra u(n)), so BA = (A†B†)† = (AB)† and [A, B] = P − P† with P = AB: one product instead of
+     * two, and the result is anti-Hermitian exactly in floating point.
+     */
     protected final void commutator(double[] ar, double[] ai, double[] br, double[] bi, double[] cr, double[] ci) {
+        commutators++;
+        if (skew) {
+            Dense.mul(m, ar, ai, br, bi, sr, si);
+            for (int i = 0; i < m; i++) {
+                int ii = i * m + i;
+                cr[ii] = 0.0;
+                ci[ii] = 2 * si[ii];
+                for (int j = i + 1; j < m; j++) {
+                    int ij = i * m + j, ji = j * m + i;
+                    double re = sr[ij] - sr[ji], im = si[ij] + si[ji];
+                    cr[ij] = re;
+                    ci[ij] = im;
+                    cr[ji] = -re;
+                    ci[ji] = im;
+                }
+            }
+            return;
+        }
         mulLeft(m, ar, ai, br, bi, cr, ci);
         mulLeft(m, br, bi, ar, ai, sr, si);
         int len = m * m;
@@ -289,7 +363,6 @@ public abstract class Kernel {
             cr[q] -= sr[q];
             ci[q] -= si[q];
         }
-        commutators++;
     }
 
     /** out = a X + b Y (planar m×m); out may alias X or Y. */

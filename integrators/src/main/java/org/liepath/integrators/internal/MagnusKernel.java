@@ -135,12 +135,11 @@ public final class MagnusKernel extends Kernel {
         commutator(b0r, b0i, yr, yi, ur, ui);
         // Ω = h B0 + h²(Q1 + Q2) + h³(Q3 + Q4) + h⁴(Q5 + Q6) − h⁵ Q7'/42
         double h2 = h * h, h3 = h2 * h, h4 = h3 * h, h5 = h4 * h;
-        lin(h, b0r, b0i, h2, q1r, q1i, wr, wi);
-        lin(1.0, wr, wi, h2, q2r, q2i, wr, wi);
-        lin(1.0, wr, wi, h3, q3r, q3i, wr, wi);
-        lin(1.0, wr, wi, h3, q4r, q4i, wr, wi);
-        lin(1.0, wr, wi, h4, q5r, q5i, wr, wi);
-        lin(1.0, wr, wi, h4, q6r, q6i, wr, wi);
-        lin(1.0, wr, wi, -h5 / 42, ur, ui, wr, wi);
+        double c7 = -h5 / 42;
+        int len = m * m;
+        for (int q = 0; q < len; q++) {
+            wr[q] = h * b0r[q] + h2 * (q1r[q] + q2r[q]) + h3 * (q3r[q] + q4r[q]) + h4 * (q5r[q] + q6r[q]) + c7 * ur[q];
+            wi[q] = h * b0i[q] + h2 * (q1i[q] + q2i[q]) + h3 * (q3i[q] + q4i[q]) + h4 * (q5i[q] + q6i[q]) + c7 * ui[q];
+        }
     }
 }

@@ -36,12 +36,10 @@ public final class PiecewiseKernel extends Kernel {
             expApply(wr, wi, p, xr, xi);
             return;
         }
-        exponential(1.0 / pieces, wr, wi, er, ei);
-        int len = m * p;
+        // the same factor is applied many times, so its rounding would add coherently: increment form
+        increment(1.0 / pieces, wr, wi, er, ei);
         for (long k = 0; k < pieces; k++) {
-            mulLeft(p, er, ei, xr, xi, sr, si);
-            System.arraycopy(sr, 0, xr, 0, len);
-            System.arraycopy(si, 0, xi, 0, len);
+            addLeft(p, er, ei, xr, xi);
         }
     }
 
