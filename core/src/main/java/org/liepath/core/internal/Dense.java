@@ -12,8 +12,10 @@ public final class Dense {
      * c = a·b. Outputs must not alias inputs. Cost 8n³ flops.
      *
      * <p>Kernel choice (measured with JMH in the benchmarks module, {@code MatMulBenchmark}): n = 2 is fully
-     * unrolled, n = 4 keeps a row of c in registers; otherwise an i-k-j loop on the planar arrays with two k-rows of b per pass, so each row of c is
-     * loaded and stored half as often and the j loop (unit stride in b and c) is vectorised by the JIT.
+     * unrolled, n = 3 and 4 keep a row of c in registers; otherwise an i-k-j loop on the planar arrays over pairs of
+     * rows of c with two k-rows of b per pass, so each row of c is loaded and stored half as often, each element of b
+     * serves two rows, and the j loop (unit stride in b and c) is vectorised by the JIT. Blocks of four rows were
+     * tried and measured no faster (more live vector registers than x86-64 has).
      */
     public static void mul(int n, double[] ar, double[] ai, double[] br, double[] bi, double[] cr, double[] ci) {
         if (n == 2) {
