@@ -156,14 +156,20 @@ public final class LieAlgebra {
         Require.positive(tolerance, "tolerance");
         int n = checkList(basis, "basis");
         boolean minusI = hermitianKind(basis, "basis");
-        List<double[]> unit = new ArrayList<>();
+        List<double[]> unit = unitVectors(basis, minusI);
+        Basis bs = orthonormal(n, unit, tolerance);
+        RealStructure s = checkClosed(bs, unit, tolerance, "basis", basis);
+        return new LieAlgebra(n, false, tolerance, bs, s);
+    }
+
+    /** The elements as unit-norm vectors (times −i first when minusI), a zero element staying zero. */
+    private static List<double[]> unitVectors(List<Operator> basis, boolean minusI) {
+        List<double[]> unit = new ArrayList<>(basis.size());
         for (Operator b : basis) {
             double nb = b.norm();
             unit.add(MatVec.of(b, minusI, nb == 0 ? 0 : 1 / nb));
         }
-        Basis bs = orthonormal(n, unit, tolerance);
-        RealStructure s = checkClosed(bs, unit, tolerance, "basis", basis);
-        return new LieAlgebra(n, false, tolerance, bs, s);
+        return unit;
     }
 
     /**
@@ -176,11 +182,7 @@ public final class LieAlgebra {
      */
     public static LieAlgebra complexSpan(List<Operator> basis) {
         int n = checkList(basis, "basis");
-        List<double[]> unit = new ArrayList<>();
-        for (Operator b : basis) {
-            double nb = b.norm();
-            unit.add(MatVec.of(b, false, nb == 0 ? 0 : 1 / nb));
-        }
+        List<double[]> unit = unitVectors(basis, false);
         Basis bs = complexOrthonormal(n, unit, DEFAULT_TOLERANCE);
         RealStructure s = checkClosed(bs, unit, DEFAULT_TOLERANCE, "basis", basis);
         return new LieAlgebra(n, true, DEFAULT_TOLERANCE, bs, s);
