@@ -70,15 +70,8 @@ class RootSystemNamesTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("systems")
     void stringNamerNamesEveryType(String label, List<double[]> roots, int rank, String expected) {
-        List<double[]> positive = positive(roots);
-        // integer squared lengths: every system above has squared lengths in {1/2·k}; doubling makes them integers
-        int[] lengths = new int[positive.size()];
-        List<Integer> comp = new ArrayList<>();
-        for (int k = 0; k < lengths.length; k++) {
-            lengths[k] = (int) Math.round(2 * dot(positive.get(k), positive.get(k)));
-            comp.add(k);
-        }
-        String got = StringTypes.name(comp, lengths, rank);
+        int[] lengths = integerLengths(roots);
+        String got = StringTypes.name(all(lengths.length), lengths, rank);
         // the string namer gives the low-rank coincidences their classical names from the series (A1 = su(2),
         // B2 as so(5) via the B series needs k ≥ 2 and 2k short roots)
         assertEquals(expected, got, label);
@@ -87,13 +80,7 @@ class RootSystemNamesTest {
     @ParameterizedTest(name = "{0} with one root length perturbed")
     @MethodSource("systems")
     void threeLengthsAreNoRootSystem(String label, List<double[]> roots, int rank, String expected) {
-        List<double[]> positive = positive(roots);
-        int[] lengths = new int[positive.size()];
-        List<Integer> comp = new ArrayList<>();
-        for (int k = 0; k < lengths.length; k++) {
-            lengths[k] = (int) Math.round(2 * dot(positive.get(k), positive.get(k)));
-            comp.add(k);
-        }
+        int[] lengths = integerLengths(roots);
         if (lengths.length < 2) {
             return;
         }
@@ -104,7 +91,25 @@ class RootSystemNamesTest {
         }
         // a third length (or, for one-length systems, a second one in a ratio no root system has)
         lengths[0] = lo == hi ? 5 * lo : lo + hi;
-        assertNull(StringTypes.name(comp, lengths, rank), label);
+        assertNull(StringTypes.name(all(lengths.length), lengths, rank), label);
+    }
+
+    /** Squared lengths of the positive roots, doubled: every system here has squared lengths in ½ℤ. */
+    private static int[] integerLengths(List<double[]> roots) {
+        List<double[]> positive = positive(roots);
+        int[] lengths = new int[positive.size()];
+        for (int k = 0; k < lengths.length; k++) {
+            lengths[k] = (int) Math.round(2 * dot(positive.get(k), positive.get(k)));
+        }
+        return lengths;
+    }
+
+    private static List<Integer> all(int n) {
+        List<Integer> comp = new ArrayList<>();
+        for (int k = 0; k < n; k++) {
+            comp.add(k);
+        }
+        return comp;
     }
 
     // ------------------------------------------------------------------ root systems
