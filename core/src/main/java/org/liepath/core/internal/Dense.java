@@ -326,4 +326,138 @@ public final class Dense {
             a[o2 + j] = t;
         }
     }
+    /**
+     * c = a·b for factors whose product is known to be Hermitian (c = c†), e.g. two commuting Hermitian matrices
+     * such as powers of A² or real polynomials in A² for an anti-Hermitian A. Only the upper triangle (i ≤ j) is
+     * computed; the lower one is filled with its exact conjugate mirror c_ji = conj(c_ij) and the diagonal's
+     * imaginary part is set to exactly 0, so the result is Hermitian to the last bit.
+     *
+     * <p>Precondition (not checked): a·b is Hermitian in exact arithmetic. If it is not, the result is the
+     * Hermitian matrix with the upper triangle of a·b. Outputs must not alias inputs. Cost ≈ 4n³ flops (half of
+     * {@link #mul}). For n ≥ 5 each upper entry receives the same sums in the same order as in {@link #mul}, so it
+     * is bit-identical to {@link #mul}'s entry; for n ≤ 4 the unrolled full products of {@link #mul} are used (the
+     * triangle saves nothing there) and then mirrored.
+     */
+    public static void mulHermitian(int n, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
+                                    double[] ci) {
+        mulUpper(n, ar, ai, br, bi, cr, ci);
+        mirrorUpper(n, cr, ci, 1.0);
+    }
+
+    /**
+     * c = a·b for factors whose product is known to be anti-Hermitian (c = −c†), e.g. A·S(A²) for an
+     * anti-Hermitian A and a Hermitian real polynomial S in A² (which commutes with A). Only the upper triangle is
+     * computed; the lower one is filled with c_ji = −conj(c_ij) and the diagonal's real part is set to exactly 0.
+     * Preconditions, aliasing, cost and bit-identity of the upper triangle as for {@link #mulHermitian}.
+     */
+    public static void mulAntiHermitian(int n, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
+                                        double[] ci) {
+        mulUpper(n, ar, ai, br, bi, cr, ci);
+        mirrorUpper(n, cr, ci, -1.0);
+    }
+
+    /**
+     * Upper triangle (j ≥ i) of c = a·b; entries below it are unspecified (the mirror overwrites them). Same
+     * k blocking and row pairing as {@link #mul}, with the j loop of each row pair starting at the pair's first
+     * row: still unit stride, so the JIT vectorises it as before.
+     */
+    private static void mulUpper(int n, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
+                                 double[] ci) {
+        if (n >= 2 && n <= 4) {
+            mul(n, ar, ai, br, bi, cr, ci);
+            return;
+        }
+        java.util.Arrays.fill(cr, 0, n * n, 0.0);
+        java.util.Arrays.fill(ci, 0, n * n, 0.0);
+        int kb = Math.max(2, (8192 / n) & ~1);
+        for (int k0 = 0; k0 < n; k0 += kb) {
+            int k1 = Math.min(n, k0 + kb);
+            int i = 0;
+            for (; i + 1 < n; i += 2) {
+                upperRowPair(n, i, k0, k1, ar, ai, br, bi, cr, ci);
+            }
+            if (i < n) {
+                upperLastRow(n, i, k0, k1, ar, ai, br, bi, cr, ci);
+            }
+        }
+    }
+
+    /**
+     * Rows i and i+1 of c on columns j ≥ i over the k range [k0, k1), two k-rows of b per pass (the sums of
+     * {@link #rowPair}, restricted to the triangle; entry (i+1, i) is formed too, to keep one loop for both rows).
+     */
+    private static void upperRowPair(int n, int i, int k0, int k1, double[] ar, double[] ai, double[] br,
+                                     double[] bi, double[] cr, double[] ci) {
+        int in = i * n, jn = in + n;
+        int k = k0;
+        for (; k + 1 < k1; k += 2) {
+            double xr = ar[in + k], xi = ai[in + k], yr = ar[in + k + 1], yi = ai[in + k + 1];
+            double ur = ar[jn + k], ui = ai[jn + k], vr = ar[jn + k + 1], vi = ai[jn + k + 1];
+            if (xr == 0 && xi == 0 && yr == 0 && yi == 0 && ur == 0 && ui == 0 && vr == 0 && vi == 0) {
+                continue;
+            }
+            int kn = k * n, k1n = kn + n;
+            for (int j = i; j < n; j++) {
+                double pr = br[kn + j], pim = bi[kn + j], qr = br[k1n + j], qi = bi[k1n + j];
+                cr[in + j] += xr * pr - xi * pim + yr * qr - yi * qi;
+                ci[in + j] += xr * pim + xi * pr + yr * qi + yi * qr;
+                cr[jn + j] += ur * pr - ui * pim + vr * qr - vi * qi;
+                ci[jn + j] += ur * pim + ui * pr + vr * qi + vi * qr;
+            }
+        }
+        if (k < k1) {
+            double xr = ar[in + k], xi = ai[in + k], ur = ar[jn + k], ui = ai[jn + k];
+            int kn = k * n;
+            for (int j = i; j < n; j++) {
+                double pr = br[kn + j], pim = bi[kn + j];
+                cr[in + j] += xr * pr - xi * pim;
+                ci[in + j] += xr * pim + xi * pr;
+                cr[jn + j] += ur * pr - ui * pim;
+                ci[jn + j] += ur * pim + ui * pr;
+            }
+        }
+    }
+
+    /** The last row of an odd n on its single triangle entry (i, i) = (n−1, n−1), as {@link #row} forms it. */
+    private static void upperLastRow(int n, int i, int k0, int k1, double[] ar, double[] ai, double[] br,
+                                     double[] bi, double[] cr, double[] ci) {
+        int in = i * n;
+        double sr = cr[in + i], si = ci[in + i];
+        int k = k0;
+        for (; k + 1 < k1; k += 2) {
+            double xr = ar[in + k], xi = ai[in + k], yr = ar[in + k + 1], yi = ai[in + k + 1];
+            if (xr == 0 && xi == 0 && yr == 0 && yi == 0) {
+                continue;
+            }
+            double pr = br[k * n + i], pim = bi[k * n + i], qr = br[k * n + n + i], qi = bi[k * n + n + i];
+            sr += xr * pr - xi * pim + yr * qr - yi * qi;
+            si += xr * pim + xi * pr + yr * qi + yi * qr;
+        }
+        if (k < k1) {
+            double xr = ar[in + k], xi = ai[in + k], pr = br[k * n + i], pim = bi[k * n + i];
+            sr += xr * pr - xi * pim;
+            si += xr * pim + xi * pr;
+        }
+        cr[in + i] = sr;
+        ci[in + i] = si;
+    }
+
+    /**
+     * Overwrites the strict lower triangle with sign·conj of the upper one (c_ji = sign·conj(c_ij)) and zeroes the
+     * diagonal's imaginary part (sign = +1, Hermitian) or real part (sign = −1, anti-Hermitian).
+     */
+    private static void mirrorUpper(int n, double[] cr, double[] ci, double sign) {
+        for (int i = 0; i < n; i++) {
+            int in = i * n;
+            for (int j = i + 1; j < n; j++) {
+                cr[j * n + i] = sign * cr[in + j];
+                ci[j * n + i] = -sign * ci[in + j];
+            }
+            if (sign > 0) {
+                ci[in + i] = 0.0;
+            } else {
+                cr[in + i] = 0.0;
+            }
+        }
+    }
 }
