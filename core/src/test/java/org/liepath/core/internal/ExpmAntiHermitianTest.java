@@ -100,7 +100,9 @@ class ExpmAntiHermitianTest {
         // with a modest c; measured, c ≤ 0.95 over n = 3 … 64 and ‖A‖₁ = 1e-3 … 80, so c = 10 leaves room without
         // hiding a wrong coefficient (that would be an O(‖A‖^{2m+1}) or larger change).
         // Unitarity: r_m(A) is exactly unitary for anti-Hermitian A (q_m(A)† = q_m(−A), so r_m(A)† r_m(A) = I);
-        // the defect of the computed one is the same rounding, ≲ c n u max(1, ‖A‖₁) (measured c ≤ 1.4; bound 10).
+        // the defect of the computed one is the same rounding of an increment of size ~‖A‖ (checked in the form
+        // D + D† + D†D, which adds no rounding of I), so ≲ c n u ‖A‖₁ (measured c ≤ 1.4 over the same range;
+        // bound 10). The general path measured c ≤ 1.7 on the same matrices.
         Random r = new Random(seed);
         int n = DIMS[r.nextInt(DIMS.length)];
         double[] branch = BRANCHES[r.nextInt(BRANCHES.length)];
@@ -112,7 +114,7 @@ class ExpmAntiHermitianTest {
         double bound = 10 * n * U * norm;
         assertTrue(diff <= bound, "n = " + n + ", ‖A‖₁ = " + norm + ": ‖ΔD‖ = " + diff + " > " + bound);
         double defect = unitarityDefect(n, got);
-        double ubound = 10 * n * U * Math.max(1, norm);
+        double ubound = 10 * n * U * norm;
         assertTrue(defect <= ubound, "n = " + n + ", ‖A‖₁ = " + norm + ": unitarity " + defect + " > " + ubound);
     }
 
