@@ -9,7 +9,9 @@ package org.liepath.core.internal;
  * θ_m and the Padé coefficients b_j = (2m−j)!/((m−j)! j!) are the published double-precision values. The powers
  * A², A⁴ formed for the degree tests are reused (rescaled by 2^{-2s}, 2^{-4s}) after scaling, as in the paper.
  * Orders 1 and 2 use closed forms ({@link #exp2}), which are exact to rounding also for defective and nearly
- * degenerate 2×2 matrices.
+ * degenerate 2×2 matrices. For anti-Hermitian A (Hamiltonian steps), {@link #computeIncrementAntiHermitian}
+ * evaluates the same approximant with half-cost products, since its even powers and V are Hermitian and U is
+ * anti-Hermitian.
  *
  * <p>A workspace object holds every scratch array, so repeated calls at one dimension allocate nothing. Instances are
  * not thread-safe; use one per thread. Not part of the public API.
