@@ -30,6 +30,15 @@ public final class Dense {
             mul3(ar, ai, br, bi, cr, ci);
             return;
         }
+        blocked(n, false, ar, ai, br, bi, cr, ci);
+    }
+
+    /**
+     * The general product loop: all of c, or (upper) its triangle j ≥ i, where each row pair's j loop starts at the
+     * pair's first row (still unit stride) and entry (i+1, i) is formed too, to keep one loop for both rows.
+     */
+    private static void blocked(int n, boolean upper, double[] ar, double[] ai, double[] br, double[] bi,
+                                double[] cr, double[] ci) {
         java.util.Arrays.fill(cr, 0, n * n, 0.0);
         java.util.Arrays.fill(ci, 0, n * n, 0.0);
         // k is blocked so that the panel of b rows in use (both planes) stays within ~128 KB (a Level-2 cache)
@@ -38,21 +47,26 @@ public final class Dense {
             int k1 = Math.min(n, k0 + kb);
             int i = 0;
             for (; i + 1 < n; i += 2) {
-                rowPair(n, i, k0, k1, ar, ai, br, bi, cr, ci);
+                rowPair(n, i, upper ? i : 0, k0, k1, ar, ai, br, bi, cr, ci);
             }
             if (i < n) {
-                row(n, i, k0, k1, ar, ai, br, bi, cr, ci);
+                if (upper) {
+                    upperLastRow(n, i, k0, k1, ar, ai, br, bi, cr, ci);
+                } else {
+                    row(n, i, k0, k1, ar, ai, br, bi, cr, ci);
+                }
             }
         }
     }
 
     /**
-     * Rows i and i+1 of c over the k range [k0, k1), two k-rows of b per pass: each b element loaded serves both
+     * Rows i and i+1 of c on columns j0 … n−1 over the k range [k0, k1), two k-rows of b per pass: each b element
+     * loaded serves both
      * rows of c, so a vectorised j step moves 12 doubles for 32 flops instead of 8 for 16. Each entry of c receives
      * the same sums in the same order as in {@link #row}, so the result does not depend on the row pairing.
      */
-    private static void rowPair(int n, int i, int k0, int k1, double[] ar, double[] ai, double[] br, double[] bi,
-                                double[] cr, double[] ci) {
+    private static void rowPair(int n, int i, int j0, int k0, int k1, double[] ar, double[] ai, double[] br,
+                                double[] bi, double[] cr, double[] ci) {
         int in = i * n, jn = in + n;
         int k = k0;
         for (; k + 1 < k1; k += 2) {
@@ -62,7 +76,7 @@ public final class Dense {
                 continue; // sparse operands (Kronecker products, superoperators) skip whole 2×2 blocks of a
             }
             int kn = k * n, k1n = kn + n;
-            for (int j = 0; j < n; j++) {
+            for (int j = j0; j < n; j++) {
                 double pr = br[kn + j], pim = bi[kn + j], qr = br[k1n + j], qi = bi[k1n + j];
                 cr[in + j] += xr * pr - xi * pim + yr * qr - yi * qi;
                 ci[in + j] += xr * pim + xi * pr + yr * qi + yi * qr;
@@ -73,7 +87,7 @@ public final class Dense {
         if (k < k1) {
             double xr = ar[in + k], xi = ai[in + k], ur = ar[jn + k], ui = ai[jn + k];
             int kn = k * n;
-            for (int j = 0; j < n; j++) {
+            for (int j = j0; j < n; j++) {
                 double pr = br[kn + j], pim = bi[kn + j];
                 cr[in + j] += xr * pr - xi * pim;
                 ci[in + j] += xr * pim + xi * pr;
@@ -375,19 +389,7 @@ public final class Dense {
             mul(n, ar, ai, br, bi, cr, ci);
             return;
         }
-        java.util.Arrays.fill(cr, 0, n * n, 0.0);
-        java.util.Arrays.fill(ci, 0, n * n, 0.0);
-        int kb = Math.max(2, (8192 / n) & ~1);
-        for (int k0 = 0; k0 < n; k0 += kb) {
-            int k1 = Math.min(n, k0 + kb);
-            int i = 0;
-            for (; i + 1 < n; i += 2) {
-                upperRowPair(n, i, k0, k1, ar, ai, br, bi, cr, ci);
-            }
-            if (i < n) {
-                upperLastRow(n, i, k0, k1, ar, ai, br, bi, cr, ci);
-            }
-        }
+        blocked(n, true, ar, ai, br, bi, cr, ci);
     }
 
     /** n = 3 or 4: {@link #upper3} or {@link #upper4}, each with its mirror written out. */
@@ -539,42 +541,6 @@ public final class Dense {
             cr[0] = 0.0;
             cr[4] = 0.0;
             cr[8] = 0.0;
-        }
-    }
-
-    /**
-     * Rows i and i+1 of c on columns j ≥ i over the k range [k0, k1), two k-rows of b per pass (the sums of
-     * {@link #rowPair}, restricted to the triangle; entry (i+1, i) is formed too, to keep one loop for both rows).
-     */
-    private static void upperRowPair(int n, int i, int k0, int k1, double[] ar, double[] ai, double[] br,
-                                     double[] bi, double[] cr, double[] ci) {
-        int in = i * n, jn = in + n;
-        int k = k0;
-        for (; k + 1 < k1; k += 2) {
-            double xr = ar[in + k], xi = ai[in + k], yr = ar[in + k + 1], yi = ai[in + k + 1];
-            double ur = ar[jn + k], ui = ai[jn + k], vr = ar[jn + k + 1], vi = ai[jn + k + 1];
-            if (xr == 0 && xi == 0 && yr == 0 && yi == 0 && ur == 0 && ui == 0 && vr == 0 && vi == 0) {
-                continue;
-            }
-            int kn = k * n, k1n = kn + n;
-            for (int j = i; j < n; j++) {
-                double pr = br[kn + j], pim = bi[kn + j], qr = br[k1n + j], qi = bi[k1n + j];
-                cr[in + j] += xr * pr - xi * pim + yr * qr - yi * qi;
-                ci[in + j] += xr * pim + xi * pr + yr * qi + yi * qr;
-                cr[jn + j] += ur * pr - ui * pim + vr * qr - vi * qi;
-                ci[jn + j] += ur * pim + ui * pr + vr * qi + vi * qr;
-            }
-        }
-        if (k < k1) {
-            double xr = ar[in + k], xi = ai[in + k], ur = ar[jn + k], ui = ai[jn + k];
-            int kn = k * n;
-            for (int j = i; j < n; j++) {
-                double pr = br[kn + j], pim = bi[kn + j];
-                cr[in + j] += xr * pr - xi * pim;
-                ci[in + j] += xr * pim + xi * pr;
-                cr[jn + j] += ur * pr - ui * pim;
-                ci[jn + j] += ur * pim + ui * pr;
-            }
         }
     }
 
