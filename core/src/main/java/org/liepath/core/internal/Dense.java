@@ -61,9 +61,9 @@ public final class Dense {
 
     /**
      * Rows i and i+1 of c on columns j0 … n−1 over the k range [k0, k1), two k-rows of b per pass: each b element
-     * loaded serves both
-     * rows of c, so a vectorised j step moves 12 doubles for 32 flops instead of 8 for 16. Each entry of c receives
-     * the same sums in the same order as in {@link #row}, so the result does not depend on the row pairing.
+     * loaded serves both rows of c, so a vectorised j step moves 12 doubles for 32 flops instead of 8 for 16. Each
+     * entry of c receives the same sums in the same order as in {@link #row}, so the result does not depend on the
+     * row pairing, nor on the start column.
      */
     private static void rowPair(int n, int i, int j0, int k0, int k1, double[] ar, double[] ai, double[] br,
                                 double[] bi, double[] cr, double[] ci) {
