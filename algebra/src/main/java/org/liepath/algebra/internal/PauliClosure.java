@@ -89,15 +89,16 @@ public final class PauliClosure {
      * Closure of single strings. {@code gens} holds the generators' words back to back (x then z, 2w words each).
      */
     public static Result ofStrings(int words, long[] gens, int count, int maxDimension, ProgressListener listener) {
-        // a chain of k strings typically closes on a few k² strings; the table grows beyond that when needed
-        StringTable t = new StringTable(words, Math.min(1 << 12, 4 * count * count));
+        // k local strings typically close on about k² strings (so(2n) from 2n−1 chain terms: n(2n−1)); the table
+        // grows beyond that when needed
+        StringTable t = new StringTable(words, Math.min(1 << 12, count * count));
         for (int g = 0; g < count; g++) {
             t.intern(gens, g * 2 * words);
             if (t.size() > maxDimension) {
                 throw limit(maxDimension);
             }
         }
-        ProgressListener[] l = {listener};
+        ProgressListener[] l = {listener == ProgressListener.NONE ? null : listener};
         long[] buf = new long[2 * words];
         // the generators, deduplicated, are entries 0 … g−1; each accepted string is multiplied by every generator
         // it anticommutes with (brackets with generators suffice, see the class comment)
