@@ -191,11 +191,38 @@ public final class MagnusKernel extends Kernel {
 
     private static final double W1 = 0.5 - Math.sqrt(5.0 / 6) / 6, W2 = 0.5 + Math.sqrt(5.0 / 6) / 6;
     private static final double V1 = Tables.V1, V2 = Tables.V2;
-    private static final double[] B0 = {W1 / 2, W2 / 2, W2 / 2, W1 / 2};
-    private static final double[] B1 = {-V1 * W1 / 2, -V2 * W2 / 2, V2 * W2 / 2, V1 * W1 / 2};
-    private static final double[] B2 = {V1 * V1 * W1 / 2, V2 * V2 * W2 / 2, V2 * V2 * W2 / 2, V1 * V1 * W1 / 2};
-    private static final double[] B3 = {-V1 * V1 * V1 * W1 / 2, -V2 * V2 * V2 * W2 / 2, V2 * V2 * V2 * W2 / 2,
-        V1 * V1 * V1 * W1 / 2};
+    /**
+     * Rows of the node weights of B0…B3 (B_i = Σ_j row_ij A(t_j)): B0 = (E0, E1, E1, E0), B1 = (−O0, −O1, O1, O0),
+     * B2 = (E2, E3, E3, E2), B3 = (−O2, −O3, O3, O2), with E = w/2 · v^{2i}, O = w/2 · v^{2i+1} for the Gauss weights
+     * w and node offsets v from the midpoint.
+     */
+    private static final double E0 = W1 / 2, E1 = W2 / 2, O0 = V1 * W1 / 2, O1 = V2 * W2 / 2;
+    private static final double E2 = V1 * V1 * W1 / 2, E3 = V2 * V2 * W2 / 2;
+    private static final double O2 = V1 * V1 * V1 * W1 / 2, O3 = V2 * V2 * V2 * W2 / 2;
+
+    /**
+     * The weights of B0…B3 from the node symmetry: the rows of B0 and B2 are even in the node order, those of B1 and
+     * B3 odd, so each term needs two sums and two differences of node values and eight products instead of sixteen.
+     * G_0's weights are the row sums: exactly zero for the odd rows.
+     */
+    private void eighthWeights() {
+        double[] c0 = coef[0], c1 = coef[1], c2 = coef[2], c3 = coef[3];
+        double[] b0 = beta[0], b1 = beta[1], b2 = beta[2], b3 = beta[3];
+        int terms = sys.terms;
+        for (int l = 0; l < terms; l++) {
+            double s03 = c0[l] + c3[l], s12 = c1[l] + c2[l], d03 = c3[l] - c0[l], d12 = c2[l] - c1[l];
+            b0[l] = E0 * s03 + E1 * s12;
+            b1[l] = O0 * d03 + O1 * d12;
+            b2[l] = E2 * s03 + E3 * s12;
+            b3[l] = O2 * d03 + O3 * d12;
+        }
+        if (b0.length > terms) {
+            b0[terms] = E0 * 2 + E1 * 2;
+            b1[terms] = 0.0;
+            b2[terms] = E2 * 2 + E3 * 2;
+            b3[terms] = 0.0;
+        }
+    }
 
     private void eighth(double h) {
         double[][] s = m6;
@@ -203,10 +230,7 @@ public final class MagnusKernel extends Kernel {
         double[] q1r = s[8], q1i = s[9], q2r = s[10], q2i = s[11], q3r = s[12], q3i = s[13], q4r = s[14], q4i = s[15];
         double[] q5r = s[16], q5i = s[17], xr = s[18], xi = s[19], yr = s[20], yi = s[21], ur = s[22], ui = s[23];
         double[] q6r = s[24], q6i = s[25];
-        weights(0, 1.0, B0);
-        weights(1, 1.0, B1);
-        weights(2, 1.0, B2);
-        weights(3, 1.0, B3);
+        eighthWeights();
         if (pairs != null) {
             // B1 enters only through Q2, a first-level commutator: its matrix is never needed
             use(0, beta[0], b0r, b0i);
