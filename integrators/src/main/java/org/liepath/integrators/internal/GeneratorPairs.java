@@ -3,15 +3,17 @@ package org.liepath.integrators.internal;
 /**
  * The commutators C_kl = [G_k, G_l] (k &lt; l) of a system's generators, so that a commutator of two generator
  * combinations X = Σ x_k G_k, Y = Σ y_l G_l comes from bilinearity as [X, Y] = Σ_{k&lt;l} (x_k y_l − x_l y_k) C_kl:
- * one pass of real axpys over the stored pairs instead of a complex matrix product (an exact rearrangement, so the
- * result differs from the product route by rounding only). The constant part G_0, when present, is generator number
+ * one pass of real multiply–adds over the stored pairs instead of a complex matrix product (an exact rearrangement,
+ * so the result differs from the product route by rounding only). Entries are stored pair-innermost, so up to three
+ * outputs are summed in one pass with their running sums in registers. The constant part G_0, when present, is generator number
  * {@code terms} with weight w0.
  *
  * <p>For an anti-Hermitian system each C_kl comes from the same P − P† route as every other commutator, so it is
  * exactly anti-Hermitian; only its upper triangle is stored (packed row by row) and combined with real weights, and the
  * lower triangle is written as the negated conjugate, so every combined result is exactly anti-Hermitian too.
  *
- * <p>Worth it only when P = n(n−1)/2 pair axpys are cheaper than the product they replace: see {@link #pays}.
+ * <p>Worth it only when the P = n(n−1)/2 pairs cost less than the products they replace: see {@link #pays}. The
+ * table is built once per kernel (P commutators at construction).
  * Mutable scratch inside, so one instance per kernel; not thread-safe.
  */
 final class GeneratorPairs {

@@ -12,6 +12,14 @@ package org.liepath.integrators.internal;
  * </ul>
  * Adaptive runs use the step doubling of {@link Kernel#trial}.
  *
+ * <p>Assembly: every node combination (A_j, α_j, B_j) is a fixed linear combination of the node values
+ * A(t_j) = Σ_k c_k(t_j) G_k, so its weights on the generators are formed first (a few multiply–adds per term) and the
+ * matrices come from one pass over the generators. When {@link GeneratorPairs#pays} says so, the commutators whose
+ * operands are both generator combinations (the single one of order 4, C1 of order 6, Q1, Q2 and the [B0, B2] part
+ * of Q3 of order 8) come from the stored [G_k, G_l] instead of a matrix product: the same Ω up to rounding. The
+ * {@link #commutators} counter counts the scheme's commutators (1, 3 or 10 per step) whichever route computes
+ * them.
+ *
  * <p>Mutable and not thread-safe, like every {@link Kernel}: one instance per run or per stepper.
  */
 public final class MagnusKernel extends Kernel {
@@ -26,6 +34,9 @@ public final class MagnusKernel extends Kernel {
     private final double[] x, y;
     /** Selected weights and destinations of one {@link LinearSystem#combineAll} call. */
     private final double[][] selW = new double[4][], selR = new double[4][], selI = new double[4][];
+    /** Addends and destinations of the commutators of one {@link GeneratorPairs#combine} call. */
+    private final double[][] addR = new double[3][], addI = new double[3][], pairR = new double[3][],
+            pairI = new double[3][];
 
     public MagnusKernel(LinearSystem sys, int order) {
         this(sys, order, GeneratorPairs.pays(sys, order));
@@ -93,10 +104,6 @@ public final class MagnusKernel extends Kernel {
     private void build(int count) {
         sys.combineAll(count, selW, selR, selI);
     }
-
-    /** Addends and destinations of the commutators of one {@link GeneratorPairs#combine} call. */
-    private final double[][] addR = new double[3][], addI = new double[3][], pairR = new double[3][],
-            pairI = new double[3][];
 
     /**
      * Selects destination j of the next {@link #pairCommutators}: s·[X, Y] (+ add, may be null) for X, Y given by
