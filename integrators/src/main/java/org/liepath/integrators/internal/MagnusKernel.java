@@ -60,6 +60,16 @@ public final class MagnusKernel extends Kernel {
         y = new double[n];
     }
 
+    /**
+     * A kernel with the route of the first-level commutators fixed, for benchmarks of the two routes (the public
+     * constructor chooses by {@link GeneratorPairs#pays}).
+     *
+     * @param storedPairs true for the stored generator pairs, false for matrix products
+     */
+    public static MagnusKernel withRoute(LinearSystem sys, int order, boolean storedPairs) {
+        return new MagnusKernel(sys, order, storedPairs);
+    }
+
     /** @return whether first-level commutators come from stored generator pairs */
     boolean usesPairs() {
         return pairs != null;
