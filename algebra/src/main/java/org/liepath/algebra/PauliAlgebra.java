@@ -170,16 +170,17 @@ public final class PauliAlgebra {
     }
 
     private List<PauliSum> stringsAsBasis() {
-        PauliString[] s = new PauliString[result.table.size()];
-        for (int k = 0; k < s.length; k++) {
-            s[k] = string(qubits, result.table, k);
+        StringTable t = result.table;
+        PauliSum[] b = new PauliSum[t.size()];
+        int o = 0;
+        long[] data = t.data();
+        for (int id : t.canonicalOrder()) {
+            // one-word strings (the common case) are built from the table directly, with no copy calls
+            PauliString p = t.words() == 1 ? PauliString.ofWords(qubits, new long[]{data[2 * id]},
+                    new long[]{data[2 * id + 1]}) : string(qubits, t, id);
+            b[o++] = PauliSum.unit(p);
         }
-        Arrays.sort(s);
-        List<PauliSum> b = new ArrayList<>(s.length);
-        for (PauliString p : s) {
-            b.add(PauliSum.of(p));
-        }
-        return Collections.unmodifiableList(b);
+        return Collections.unmodifiableList(Arrays.asList(b));
     }
 
     private static PauliAlgebra fromRows(int q, PauliClosure.Result r) {

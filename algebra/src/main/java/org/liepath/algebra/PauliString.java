@@ -30,13 +30,14 @@ public final class PauliString implements Comparable<PauliString> {
     private final int qubits;
     private final long[] x;
     private final long[] z;
-    private final int hash;
+    /** 0 until first asked for (a benign race: every thread computes the same value); closures build many strings
+     * that are never hashed */
+    private int hash;
 
     PauliString(int qubits, long[] x, long[] z) {
         this.qubits = qubits;
         this.x = x;
         this.z = z;
-        this.hash = 31 * Arrays.hashCode(x) + Arrays.hashCode(z) + qubits * 0x9E3779B9;
     }
 
     static int words(int qubits) {
@@ -312,12 +313,17 @@ public final class PauliString implements Comparable<PauliString> {
             return false;
         }
         PauliString p = (PauliString) o;
-        return p.hash == hash && p.qubits == qubits && Arrays.equals(p.x, x) && Arrays.equals(p.z, z);
+        return p.qubits == qubits && Arrays.equals(p.x, x) && Arrays.equals(p.z, z);
     }
 
     @Override
     public int hashCode() {
-        return hash;
+        int h = hash;
+        if (h == 0) {
+            h = 31 * Arrays.hashCode(x) + Arrays.hashCode(z) + qubits * 0x9E3779B9;
+            hash = h;
+        }
+        return h;
     }
 
     /** Canonical order: fewer qubits first, then letters from qubit 0 with I &lt; X &lt; Y &lt; Z. */

@@ -93,6 +93,14 @@ public final class PauliSum {
         return c == 0 ? zero(p.qubits()) : new PauliSum(p.qubits(), new PauliString[]{p}, new double[]{c});
     }
 
+    /** 1·P for a string known to be non-null (no checks): the basis elements of string algebras. */
+    static PauliSum unit(PauliString p) {
+        return new PauliSum(p.qubits(), new PauliString[]{p}, UNIT_COEFFICIENT);
+    }
+
+    /** Shared by every {@link #unit} sum: coefficient arrays are never written after construction. */
+    private static final double[] UNIT_COEFFICIENT = {1.0};
+
     /**
      * @param p the Pauli letters of the string (coefficient 1)
      * @return the sum 1·P for the letters of {@code p}, e.g. {@code of("XZI")}

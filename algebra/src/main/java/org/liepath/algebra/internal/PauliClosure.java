@@ -89,7 +89,8 @@ public final class PauliClosure {
      * Closure of single strings. {@code gens} holds the generators' words back to back (x then z, 2w words each).
      */
     public static Result ofStrings(int words, long[] gens, int count, int maxDimension, ProgressListener listener) {
-        StringTable t = new StringTable(words);
+        // a chain of k strings typically closes on a few k² strings; the table grows beyond that when needed
+        StringTable t = new StringTable(words, Math.min(1 << 12, 4 * count * count));
         for (int g = 0; g < count; g++) {
             t.intern(gens, g * 2 * words);
             if (t.size() > maxDimension) {
@@ -104,26 +105,10 @@ public final class PauliClosure {
         long[] gen = Arrays.copyOf(t.data(), 2 * words * g);
         long work = 0;
         for (int i = 0; i < t.size(); i++) {
-            int base = i * 2 * words;
-            for (int s = 0; s < g; s++) {
-                long[] data = t.data();
-                int gb = s * 2 * words;
-                long acc = 0;
-                int k = 0;
-                for (int e = 0; e < words; e++) {
-                    long ax = gen[gb + e], az = gen[gb + words + e], bx = data[base + e], bz = data[base + words + e];
-                    acc ^= (ax & bz) ^ (az & bx);
-                    buf[e] = ax ^ bx;
-                    buf[words + e] = az ^ bz;
-                }
-                if ((Long.bitCount(acc) & 1) == 0) {
-                    continue;
-                }
-                int before = t.size();
-                t.intern(buf, 0);
-                if (t.size() > before && t.size() > maxDimension) {
-                    throw limit(maxDimension);
-                }
+            if (words == 1) {
+                expandOneWord(t, i, gen, maxDimension);
+            } else {
+                expand(t, i, gen, buf, maxDimension);
             }
             work += g;
             if (work > (1L << 16) || (i & 63) == 63) {
@@ -133,6 +118,44 @@ public final class PauliClosure {
         }
         report(l, t.size());
         return new Result(t, null, null, null, g);
+    }
+
+    /** Interns the product of entry i with every generator it anticommutes with (strings of any length). */
+    private static void expand(StringTable t, int i, long[] gen, long[] buf, int maxDimension) {
+        int words = t.words(), base = i * 2 * words, g = gen.length / (2 * words);
+        for (int s = 0; s < g; s++) {
+            long[] data = t.data();
+            int gb = s * 2 * words;
+            long acc = 0;
+            for (int e = 0; e < words; e++) {
+                long ax = gen[gb + e], az = gen[gb + words + e], bx = data[base + e], bz = data[base + words + e];
+                acc ^= (ax & bz) ^ (az & bx);
+                buf[e] = ax ^ bx;
+                buf[words + e] = az ^ bz;
+            }
+            if ((Long.bitCount(acc) & 1) != 0) {
+                checkLimit(t, t.intern(buf, 0), maxDimension);
+            }
+        }
+    }
+
+    /** {@link #expand} for one-word strings (at most 64 qubits): products are interned by value, with no copying. */
+    private static void expandOneWord(StringTable t, int i, long[] gen, int maxDimension) {
+        long[] data = t.data();
+        long bx = data[2 * i], bz = data[2 * i + 1];
+        for (int s = 0; s < gen.length; s += 2) {
+            long ax = gen[s], az = gen[s + 1];
+            if ((Long.bitCount((ax & bz) ^ (az & bx)) & 1) != 0) {
+                checkLimit(t, t.intern1(ax ^ bx, az ^ bz), maxDimension);
+            }
+        }
+    }
+
+    /** Throws when the string just interned at index id was new and took the table beyond the limit. */
+    private static void checkLimit(StringTable t, int id, int maxDimension) {
+        if (id == t.size() - 1 && t.size() > maxDimension) {
+            throw limit(maxDimension);
+        }
     }
 
     // ------------------------------------------------------------------ general sums

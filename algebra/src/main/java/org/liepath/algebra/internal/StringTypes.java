@@ -474,7 +474,7 @@ public final class StringTypes {
     }
 
     /** Names a simple root system from its positive roots (their number, rank and lengths), or null. */
-    private static String name(List<Integer> comp, int[] lengths, int k) {
+    static String name(List<Integer> comp, int[] lengths, int k) {
         int n = 2 * comp.size();
         int lo = Integer.MAX_VALUE, hi = 0;
         for (int i : comp) {

@@ -30,6 +30,15 @@ public final class Dense {
             mul3(ar, ai, br, bi, cr, ci);
             return;
         }
+        blocked(n, false, ar, ai, br, bi, cr, ci);
+    }
+
+    /**
+     * The general product loop: all of c, or (upper) its triangle j ≥ i, where each row pair's j loop starts at the
+     * pair's first row (still unit stride) and entry (i+1, i) is formed too, to keep one loop for both rows.
+     */
+    private static void blocked(int n, boolean upper, double[] ar, double[] ai, double[] br, double[] bi,
+                                double[] cr, double[] ci) {
         java.util.Arrays.fill(cr, 0, n * n, 0.0);
         java.util.Arrays.fill(ci, 0, n * n, 0.0);
         // k is blocked so that the panel of b rows in use (both planes) stays within ~128 KB (a Level-2 cache)
@@ -38,21 +47,26 @@ public final class Dense {
             int k1 = Math.min(n, k0 + kb);
             int i = 0;
             for (; i + 1 < n; i += 2) {
-                rowPair(n, i, k0, k1, ar, ai, br, bi, cr, ci);
+                rowPair(n, i, upper ? i : 0, k0, k1, ar, ai, br, bi, cr, ci);
             }
             if (i < n) {
-                row(n, i, k0, k1, ar, ai, br, bi, cr, ci);
+                if (upper) {
+                    upperLastRow(n, i, k0, k1, ar, ai, br, bi, cr, ci);
+                } else {
+                    row(n, i, k0, k1, ar, ai, br, bi, cr, ci);
+                }
             }
         }
     }
 
     /**
-     * Rows i and i+1 of c over the k range [k0, k1), two k-rows of b per pass: each b element loaded serves both
-     * rows of c, so a vectorised j step moves 12 doubles for 32 flops instead of 8 for 16. Each entry of c receives
-     * the same sums in the same order as in {@link #row}, so the result does not depend on the row pairing.
+     * Rows i and i+1 of c on columns j0 … n−1 over the k range [k0, k1), two k-rows of b per pass: each b element
+     * loaded serves both rows of c, so a vectorised j step moves 12 doubles for 32 flops instead of 8 for 16. Each
+     * entry of c receives the same sums in the same order as in {@link #row}, so the result does not depend on the
+     * row pairing, nor on the start column.
      */
-    private static void rowPair(int n, int i, int k0, int k1, double[] ar, double[] ai, double[] br, double[] bi,
-                                double[] cr, double[] ci) {
+    private static void rowPair(int n, int i, int j0, int k0, int k1, double[] ar, double[] ai, double[] br,
+                                double[] bi, double[] cr, double[] ci) {
         int in = i * n, jn = in + n;
         int k = k0;
         for (; k + 1 < k1; k += 2) {
@@ -62,7 +76,7 @@ public final class Dense {
                 continue; // sparse operands (Kronecker products, superoperators) skip whole 2×2 blocks of a
             }
             int kn = k * n, k1n = kn + n;
-            for (int j = 0; j < n; j++) {
+            for (int j = j0; j < n; j++) {
                 double pr = br[kn + j], pim = bi[kn + j], qr = br[k1n + j], qi = bi[k1n + j];
                 cr[in + j] += xr * pr - xi * pim + yr * qr - yi * qi;
                 ci[in + j] += xr * pim + xi * pr + yr * qi + yi * qr;
@@ -73,7 +87,7 @@ public final class Dense {
         if (k < k1) {
             double xr = ar[in + k], xi = ai[in + k], ur = ar[jn + k], ui = ai[jn + k];
             int kn = k * n;
-            for (int j = 0; j < n; j++) {
+            for (int j = j0; j < n; j++) {
                 double pr = br[kn + j], pim = bi[kn + j];
                 cr[in + j] += xr * pr - xi * pim;
                 ci[in + j] += xr * pim + xi * pr;
@@ -324,6 +338,252 @@ public final class Dense {
             double t = a[o1 + j];
             a[o1 + j] = a[o2 + j];
             a[o2 + j] = t;
+        }
+    }
+    /**
+     * c = a·b for factors whose product is known to be Hermitian (c = c†), e.g. two commuting Hermitian matrices
+     * such as powers of A² or real polynomials in A² for an anti-Hermitian A. Only the upper triangle (i ≤ j) is
+     * computed; the lower one is filled with its exact conjugate mirror c_ji = conj(c_ij) and the diagonal's
+     * imaginary part is set to exactly 0, so the result is Hermitian to the last bit.
+     *
+     * <p>Precondition (not checked): a·b is Hermitian in exact arithmetic. If it is not, the result is the
+     * Hermitian matrix with the upper triangle of a·b. Outputs must not alias inputs. Cost ≈ 4n³ flops (half of
+     * {@link #mul}). For n ≥ 5 each upper entry receives the same sums in the same order as in {@link #mul}, so it
+     * is bit-identical to {@link #mul}'s entry; n = 3 and 4 have straight-line triangle kernels (same expressions as
+     * {@link #mul}'s unrolled ones, so again bit-identical), and n = 2 uses the full 2×2 product, mirrored.
+     */
+    public static void mulHermitian(int n, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
+                                    double[] ci) {
+        if (n == 3 || n == 4) {
+            upperSmall(n, ar, ai, br, bi, cr, ci, 1.0);
+            return;
+        }
+        mulUpper(n, ar, ai, br, bi, cr, ci);
+        mirrorUpper(n, cr, ci, 1.0);
+    }
+
+    /**
+     * c = a·b for factors whose product is known to be anti-Hermitian (c = −c†), e.g. A·S(A²) for an
+     * anti-Hermitian A and a Hermitian real polynomial S in A² (which commutes with A). Only the upper triangle is
+     * computed; the lower one is filled with c_ji = −conj(c_ij) and the diagonal's real part is set to exactly 0.
+     * Preconditions, aliasing, cost and bit-identity of the upper triangle as for {@link #mulHermitian}.
+     */
+    public static void mulAntiHermitian(int n, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
+                                        double[] ci) {
+        if (n == 3 || n == 4) {
+            upperSmall(n, ar, ai, br, bi, cr, ci, -1.0);
+            return;
+        }
+        mulUpper(n, ar, ai, br, bi, cr, ci);
+        mirrorUpper(n, cr, ci, -1.0);
+    }
+
+    /**
+     * Upper triangle (j ≥ i) of c = a·b; entries below it are unspecified (the mirror overwrites them). Same
+     * k blocking and row pairing as {@link #mul}, with the j loop of each row pair starting at the pair's first
+     * row: still unit stride, so the JIT vectorises it as before.
+     */
+    private static void mulUpper(int n, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
+                                 double[] ci) {
+        if (n >= 2 && n <= 4) {
+            mul(n, ar, ai, br, bi, cr, ci);
+            return;
+        }
+        blocked(n, true, ar, ai, br, bi, cr, ci);
+    }
+
+    /** n = 3 or 4: {@link #upper3} or {@link #upper4}, each with its mirror written out. */
+    private static void upperSmall(int n, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
+                                   double[] ci, double sign) {
+        if (n == 3) {
+            upper3(ar, ai, br, bi, cr, ci, sign);
+        } else {
+            upper4(ar, ai, br, bi, cr, ci, sign);
+        }
+    }
+
+    /**
+     * n = 4: row i of the upper triangle (columns i … 3) in register accumulators, summed over k in the order of
+     * {@link #mul4} (so bit-identical to it), 10 of its 16 entries; then the mirror as in {@link #upper3}.
+     */
+    private static void upper4(double[] ar, double[] ai, double[] br, double[] bi, double[] cr, double[] ci,
+                               double sign) {
+        double r0 = 0, r1 = 0, r2 = 0, r3 = 0, i0 = 0, i1 = 0, i2 = 0, i3 = 0;
+        for (int k = 0; k < 4; k++) {
+            double xr = ar[k], xi = ai[k];
+            int o = 4 * k;
+            double p0 = br[o], p1 = br[o + 1], p2 = br[o + 2], p3 = br[o + 3];
+            double q0 = bi[o], q1 = bi[o + 1], q2 = bi[o + 2], q3 = bi[o + 3];
+            r0 += xr * p0 - xi * q0;
+            i0 += xr * q0 + xi * p0;
+            r1 += xr * p1 - xi * q1;
+            i1 += xr * q1 + xi * p1;
+            r2 += xr * p2 - xi * q2;
+            i2 += xr * q2 + xi * p2;
+            r3 += xr * p3 - xi * q3;
+            i3 += xr * q3 + xi * p3;
+        }
+        double s5 = 0, s6 = 0, s7 = 0, t5 = 0, t6 = 0, t7 = 0, s10 = 0, s11 = 0, t10 = 0, t11 = 0, s15 = 0, t15 = 0;
+        for (int k = 0; k < 4; k++) {
+            int o = 4 * k;
+            double p1 = br[o + 1], p2 = br[o + 2], p3 = br[o + 3], q1 = bi[o + 1], q2 = bi[o + 2], q3 = bi[o + 3];
+            double xr = ar[4 + k], xi = ai[4 + k];
+            s5 += xr * p1 - xi * q1;
+            t5 += xr * q1 + xi * p1;
+            s6 += xr * p2 - xi * q2;
+            t6 += xr * q2 + xi * p2;
+            s7 += xr * p3 - xi * q3;
+            t7 += xr * q3 + xi * p3;
+            xr = ar[8 + k];
+            xi = ai[8 + k];
+            s10 += xr * p2 - xi * q2;
+            t10 += xr * q2 + xi * p2;
+            s11 += xr * p3 - xi * q3;
+            t11 += xr * q3 + xi * p3;
+            xr = ar[12 + k];
+            xi = ai[12 + k];
+            s15 += xr * p3 - xi * q3;
+            t15 += xr * q3 + xi * p3;
+        }
+        double m = -sign;
+        cr[0] = r0;
+        cr[1] = r1;
+        cr[2] = r2;
+        cr[3] = r3;
+        ci[0] = i0;
+        ci[1] = i1;
+        ci[2] = i2;
+        ci[3] = i3;
+        cr[5] = s5;
+        cr[6] = s6;
+        cr[7] = s7;
+        ci[5] = t5;
+        ci[6] = t6;
+        ci[7] = t7;
+        cr[10] = s10;
+        cr[11] = s11;
+        ci[10] = t10;
+        ci[11] = t11;
+        cr[15] = s15;
+        ci[15] = t15;
+        cr[4] = sign * r1;
+        ci[4] = m * i1;
+        cr[8] = sign * r2;
+        ci[8] = m * i2;
+        cr[12] = sign * r3;
+        ci[12] = m * i3;
+        cr[9] = sign * s6;
+        ci[9] = m * t6;
+        cr[13] = sign * s7;
+        ci[13] = m * t7;
+        cr[14] = sign * s11;
+        ci[14] = m * t11;
+        if (sign > 0) {
+            ci[0] = 0.0;
+            ci[5] = 0.0;
+            ci[10] = 0.0;
+            ci[15] = 0.0;
+        } else {
+            cr[0] = 0.0;
+            cr[5] = 0.0;
+            cr[10] = 0.0;
+            cr[15] = 0.0;
+        }
+    }
+
+    /**
+     * n = 3: the six entries on and above the diagonal in straight-line code (2/3 of the 216 flops of
+     * {@link #mul3}) and the mirror c_ji = sign·conj(c_ij) with the diagonal made exactly real (sign = 1) or
+     * imaginary (sign = −1); the full kernel followed by the general mirror loop measured slower than the full
+     * product alone. Each upper entry is the same expression as in {@link #mul3}, so it is bit-identical to it.
+     */
+    private static void upper3(double[] ar, double[] ai, double[] br, double[] bi, double[] cr, double[] ci,
+                               double sign) {
+        double p0 = br[0], p1 = br[1], p2 = br[2], p4 = br[4], p5 = br[5], p7 = br[7], p8 = br[8];
+        double q0 = bi[0], q1 = bi[1], q2 = bi[2], q4 = bi[4], q5 = bi[5], q7 = bi[7], q8 = bi[8];
+        double p3 = br[3], p6 = br[6], q3 = bi[3], q6 = bi[6];
+        double xr = ar[0], xi = ai[0], yr = ar[1], yi = ai[1], zr = ar[2], zi = ai[2];
+        cr[0] = xr * p0 - xi * q0 + yr * p3 - yi * q3 + zr * p6 - zi * q6;
+        ci[0] = xr * q0 + xi * p0 + yr * q3 + yi * p3 + zr * q6 + zi * p6;
+        cr[1] = xr * p1 - xi * q1 + yr * p4 - yi * q4 + zr * p7 - zi * q7;
+        ci[1] = xr * q1 + xi * p1 + yr * q4 + yi * p4 + zr * q7 + zi * p7;
+        cr[2] = xr * p2 - xi * q2 + yr * p5 - yi * q5 + zr * p8 - zi * q8;
+        ci[2] = xr * q2 + xi * p2 + yr * q5 + yi * p5 + zr * q8 + zi * p8;
+        xr = ar[3];
+        xi = ai[3];
+        yr = ar[4];
+        yi = ai[4];
+        zr = ar[5];
+        zi = ai[5];
+        cr[4] = xr * p1 - xi * q1 + yr * p4 - yi * q4 + zr * p7 - zi * q7;
+        ci[4] = xr * q1 + xi * p1 + yr * q4 + yi * p4 + zr * q7 + zi * p7;
+        cr[5] = xr * p2 - xi * q2 + yr * p5 - yi * q5 + zr * p8 - zi * q8;
+        ci[5] = xr * q2 + xi * p2 + yr * q5 + yi * p5 + zr * q8 + zi * p8;
+        xr = ar[6];
+        xi = ai[6];
+        yr = ar[7];
+        yi = ai[7];
+        zr = ar[8];
+        zi = ai[8];
+        cr[8] = xr * p2 - xi * q2 + yr * p5 - yi * q5 + zr * p8 - zi * q8;
+        ci[8] = xr * q2 + xi * p2 + yr * q5 + yi * p5 + zr * q8 + zi * p8;
+        cr[3] = sign * cr[1];
+        ci[3] = -sign * ci[1];
+        cr[6] = sign * cr[2];
+        ci[6] = -sign * ci[2];
+        cr[7] = sign * cr[5];
+        ci[7] = -sign * ci[5];
+        if (sign > 0) {
+            ci[0] = 0.0;
+            ci[4] = 0.0;
+            ci[8] = 0.0;
+        } else {
+            cr[0] = 0.0;
+            cr[4] = 0.0;
+            cr[8] = 0.0;
+        }
+    }
+
+    /** The last row of an odd n on its single triangle entry (i, i) = (n−1, n−1), as {@link #row} forms it. */
+    private static void upperLastRow(int n, int i, int k0, int k1, double[] ar, double[] ai, double[] br,
+                                     double[] bi, double[] cr, double[] ci) {
+        int in = i * n;
+        double sr = cr[in + i], si = ci[in + i];
+        int k = k0;
+        for (; k + 1 < k1; k += 2) {
+            double xr = ar[in + k], xi = ai[in + k], yr = ar[in + k + 1], yi = ai[in + k + 1];
+            if (xr == 0 && xi == 0 && yr == 0 && yi == 0) {
+                continue;
+            }
+            double pr = br[k * n + i], pim = bi[k * n + i], qr = br[k * n + n + i], qi = bi[k * n + n + i];
+            sr += xr * pr - xi * pim + yr * qr - yi * qi;
+            si += xr * pim + xi * pr + yr * qi + yi * qr;
+        }
+        if (k < k1) {
+            double xr = ar[in + k], xi = ai[in + k], pr = br[k * n + i], pim = bi[k * n + i];
+            sr += xr * pr - xi * pim;
+            si += xr * pim + xi * pr;
+        }
+        cr[in + i] = sr;
+        ci[in + i] = si;
+    }
+
+    /**
+     * Overwrites the strict lower triangle with sign·conj of the upper one (c_ji = sign·conj(c_ij)) and zeroes the
+     * diagonal's imaginary part (sign = +1, Hermitian) or real part (sign = −1, anti-Hermitian).
+     */
+    private static void mirrorUpper(int n, double[] cr, double[] ci, double sign) {
+        for (int i = 0; i < n; i++) {
+            int in = i * n;
+            for (int j = i + 1; j < n; j++) {
+                cr[j * n + i] = sign * cr[in + j];
+                ci[j * n + i] = -sign * ci[in + j];
+            }
+            if (sign > 0) {
+                ci[in + i] = 0.0;
+            } else {
+                cr[in + i] = 0.0;
+            }
         }
     }
 }

@@ -230,13 +230,19 @@ public abstract class Kernel {
 
     /**
      * out = exp(scale·Ω) − I: Padé in increment form ({@link Expm#computeIncrement}) up to {@link #PADE_LIMIT};
-     * beyond it the increment is of order one anyway, so the eigen route's exponential minus I serves. Outputs must
-     * not alias inputs.
+     * beyond it the increment is of order one anyway, so the eigen route's exponential minus I serves. For a
+     * Hamiltonian system Ω is anti-Hermitian and the same approximant is evaluated with half-cost products
+     * ({@link Expm#computeIncrementAntiHermitian}: its even powers and V are Hermitian, U anti-Hermitian). Outputs
+     * must not alias inputs.
      */
     protected final void increment(double scale, double[] omR, double[] omI, double[] outR, double[] outI) {
         if (hexp == null || Math.abs(scale) * Dense.norm1(m, omR, omI) <= PADE_LIMIT) {
             exponentials++;
-            expm.computeIncrement(scale, omR, omI, outR, outI);
+            if (hexp != null) {
+                expm.computeIncrementAntiHermitian(scale, omR, omI, outR, outI);
+            } else {
+                expm.computeIncrement(scale, omR, omI, outR, outI);
+            }
             return;
         }
         exponential(scale, omR, omI, outR, outI);
