@@ -165,9 +165,19 @@ public abstract class Kernel {
 
     /** (wr, wi) = Σ_k alpha[k] coef[k] combined with scale s: Σ_k s·alpha_k A(t_k). */
     protected final void combineNodes(double s, double[] alpha, double[] outR, double[] outI) {
+        sys.combine(w, nodeWeights(s, alpha, w), outR, outI);
+    }
+
+    /**
+     * out[l] = Σ_k s·alpha[k]·coef[k][l] for the driven terms l (the weights of Σ_k s·alpha_k A(t_k) on the
+     * generators); entries of out beyond the terms are cleared.
+     *
+     * @return the weight Σ_k s·alpha_k of the constant part G_0
+     */
+    protected final double nodeWeights(double s, double[] alpha, double[] out) {
         int terms = sys.terms;
         double w0 = 0;
-        Arrays.fill(w, 0.0);
+        Arrays.fill(out, 0.0);
         for (int k = 0; k < alpha.length; k++) {
             double a = s * alpha[k];
             if (a == 0.0) {
@@ -176,10 +186,10 @@ public abstract class Kernel {
             w0 += a;
             double[] ck = coef[k];
             for (int l = 0; l < terms; l++) {
-                w[l] += a * ck[l];
+                out[l] += a * ck[l];
             }
         }
-        sys.combine(w, w0, outR, outI);
+        return w0;
     }
 
     /**
@@ -345,15 +355,38 @@ public abstract class Kernel {
      */
     protected final void commutator(double[] ar, double[] ai, double[] br, double[] bi, double[] cr, double[] ci) {
         commutators++;
+        bracket(1.0, ar, ai, br, bi, cr, ci);
+    }
+
+    /**
+     * (cr, ci) = s·[A, B], as {@link #commutator} (and counted as one); the scale is applied to each difference, so
+     * s·[A, B] has the bits of [A, B] scaled afterwards, without the extra pass.
+     */
+    protected final void commutator(double s, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
+                                    double[] ci) {
+        commutators++;
+        bracket(s, ar, ai, br, bi, cr, ci);
+    }
+
+    /** s·[A, B] without counting (also the route of the stored generator pairs, see {@link GeneratorPairs}). */
+    final void bracket(double s, double[] ar, double[] ai, double[] br, double[] bi, double[] cr, double[] ci) {
+        if (skew && m == 3) {
+            skewBracket3(s, ar, ai, br, bi, cr, ci);
+            return;
+        }
+        if (skew && m == 2) {
+            skewBracket2(s, ar, ai, br, bi, cr, ci);
+            return;
+        }
         if (skew) {
             Dense.mul(m, ar, ai, br, bi, sr, si);
             for (int i = 0; i < m; i++) {
                 int ii = i * m + i;
                 cr[ii] = 0.0;
-                ci[ii] = 2 * si[ii];
+                ci[ii] = s * (2 * si[ii]);
                 for (int j = i + 1; j < m; j++) {
                     int ij = i * m + j, ji = j * m + i;
-                    double re = sr[ij] - sr[ji], im = si[ij] + si[ji];
+                    double re = s * (sr[ij] - sr[ji]), im = s * (si[ij] + si[ji]);
                     cr[ij] = re;
                     ci[ij] = im;
                     cr[ji] = -re;
@@ -366,9 +399,81 @@ public abstract class Kernel {
         mulLeft(m, br, bi, ar, ai, sr, si);
         int len = m * m;
         for (int q = 0; q < len; q++) {
-            cr[q] -= sr[q];
-            ci[q] -= si[q];
+            cr[q] = s * (cr[q] - sr[q]);
+            ci[q] = s * (ci[q] - si[q]);
         }
+    }
+
+    /**
+     * s·(P − P†) with P = AB for anti-Hermitian 2×2 operands, unrolled so that the entries of P stay in registers
+     * instead of passing through a scratch product (same arithmetic as the general route up to summation order).
+     */
+    private static void skewBracket2(double s, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
+                                      double[] ci) {
+        double ar00 = ar[0], ai00 = ai[0], ar01 = ar[1], ai01 = ai[1];
+        double ar10 = ar[2], ai10 = ai[2], ar11 = ar[3], ai11 = ai[3];
+        double br00 = br[0], bi00 = bi[0], br01 = br[1], bi01 = bi[1];
+        double br10 = br[2], bi10 = bi[2], br11 = br[3], bi11 = bi[3];
+        cr[0] = 0.0;
+        ci[0] = s * (2 * (ar00 * bi00 + ai00 * br00 + ar01 * bi10 + ai01 * br10));
+        cr[3] = 0.0;
+        ci[3] = s * (2 * (ar10 * bi01 + ai10 * br01 + ar11 * bi11 + ai11 * br11));
+        double pr01 = ar00 * br01 - ai00 * bi01 + ar01 * br11 - ai01 * bi11;
+        double pr10 = ar10 * br00 - ai10 * bi00 + ar11 * br10 - ai11 * bi10;
+        double pi01 = ar00 * bi01 + ai00 * br01 + ar01 * bi11 + ai01 * br11;
+        double pi10 = ar10 * bi00 + ai10 * br00 + ar11 * bi10 + ai11 * br10;
+        double re01 = s * (pr01 - pr10), im01 = s * (pi01 + pi10);
+        cr[1] = re01;
+        ci[1] = im01;
+        cr[2] = -re01;
+        ci[2] = im01;
+    }
+
+    /**
+     * s·(P − P†) with P = AB for anti-Hermitian 3×3 operands, unrolled so that the entries of P stay in registers
+     * instead of passing through a scratch product (same arithmetic as the general route up to summation order).
+     */
+    private static void skewBracket3(double s, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
+                                      double[] ci) {
+        double ar00 = ar[0], ai00 = ai[0], ar01 = ar[1], ai01 = ai[1], ar02 = ar[2], ai02 = ai[2];
+        double ar10 = ar[3], ai10 = ai[3], ar11 = ar[4], ai11 = ai[4], ar12 = ar[5], ai12 = ai[5];
+        double ar20 = ar[6], ai20 = ai[6], ar21 = ar[7], ai21 = ai[7], ar22 = ar[8], ai22 = ai[8];
+        double br00 = br[0], bi00 = bi[0], br01 = br[1], bi01 = bi[1], br02 = br[2], bi02 = bi[2];
+        double br10 = br[3], bi10 = bi[3], br11 = br[4], bi11 = bi[4], br12 = br[5], bi12 = bi[5];
+        double br20 = br[6], bi20 = bi[6], br21 = br[7], bi21 = bi[7], br22 = br[8], bi22 = bi[8];
+        cr[0] = 0.0;
+        ci[0] = s * (2 * (ar00 * bi00 + ai00 * br00 + ar01 * bi10 + ai01 * br10 + ar02 * bi20 + ai02 * br20));
+        cr[4] = 0.0;
+        ci[4] = s * (2 * (ar10 * bi01 + ai10 * br01 + ar11 * bi11 + ai11 * br11 + ar12 * bi21 + ai12 * br21));
+        cr[8] = 0.0;
+        ci[8] = s * (2 * (ar20 * bi02 + ai20 * br02 + ar21 * bi12 + ai21 * br12 + ar22 * bi22 + ai22 * br22));
+        double pr01 = ar00 * br01 - ai00 * bi01 + ar01 * br11 - ai01 * bi11 + ar02 * br21 - ai02 * bi21;
+        double pr10 = ar10 * br00 - ai10 * bi00 + ar11 * br10 - ai11 * bi10 + ar12 * br20 - ai12 * bi20;
+        double pi01 = ar00 * bi01 + ai00 * br01 + ar01 * bi11 + ai01 * br11 + ar02 * bi21 + ai02 * br21;
+        double pi10 = ar10 * bi00 + ai10 * br00 + ar11 * bi10 + ai11 * br10 + ar12 * bi20 + ai12 * br20;
+        double re01 = s * (pr01 - pr10), im01 = s * (pi01 + pi10);
+        cr[1] = re01;
+        ci[1] = im01;
+        cr[3] = -re01;
+        ci[3] = im01;
+        double pr02 = ar00 * br02 - ai00 * bi02 + ar01 * br12 - ai01 * bi12 + ar02 * br22 - ai02 * bi22;
+        double pr20 = ar20 * br00 - ai20 * bi00 + ar21 * br10 - ai21 * bi10 + ar22 * br20 - ai22 * bi20;
+        double pi02 = ar00 * bi02 + ai00 * br02 + ar01 * bi12 + ai01 * br12 + ar02 * bi22 + ai02 * br22;
+        double pi20 = ar20 * bi00 + ai20 * br00 + ar21 * bi10 + ai21 * br10 + ar22 * bi20 + ai22 * br20;
+        double re02 = s * (pr02 - pr20), im02 = s * (pi02 + pi20);
+        cr[2] = re02;
+        ci[2] = im02;
+        cr[6] = -re02;
+        ci[6] = im02;
+        double pr12 = ar10 * br02 - ai10 * bi02 + ar11 * br12 - ai11 * bi12 + ar12 * br22 - ai12 * bi22;
+        double pr21 = ar20 * br01 - ai20 * bi01 + ar21 * br11 - ai21 * bi11 + ar22 * br21 - ai22 * bi21;
+        double pi12 = ar10 * bi02 + ai10 * br02 + ar11 * bi12 + ai11 * br12 + ar12 * bi22 + ai12 * br22;
+        double pi21 = ar20 * bi01 + ai20 * br01 + ar21 * bi11 + ai21 * br11 + ar22 * bi21 + ai22 * br21;
+        double re12 = s * (pr12 - pr21), im12 = s * (pi12 + pi21);
+        cr[5] = re12;
+        ci[5] = im12;
+        cr[7] = -re12;
+        ci[7] = im12;
     }
 
     /** out = a X + b Y (planar m×m); out may alias X or Y. */
@@ -378,6 +483,16 @@ public abstract class Kernel {
         for (int q = 0; q < len; q++) {
             outR[q] = a * xr[q] + b * yr[q];
             outI[q] = a * xi[q] + b * yi[q];
+        }
+    }
+
+    /** out = a X + b Y + c Z (planar m×m), summed as (aX + bY) + cZ; out may alias any input. */
+    protected final void lin(double a, double[] xr, double[] xi, double b, double[] yr, double[] yi, double c,
+                             double[] zr, double[] zi, double[] outR, double[] outI) {
+        int len = m * m;
+        for (int q = 0; q < len; q++) {
+            outR[q] = a * xr[q] + b * yr[q] + c * zr[q];
+            outI[q] = a * xi[q] + b * yi[q] + c * zi[q];
         }
     }
 

@@ -120,24 +120,75 @@ public final class LinearSystem {
     /** out = Σ_k w_k G_k + w0 G_0 (planar m×m). */
     public void combine(double[] w, double w0, double[] outR, double[] outI) {
         int len = m * m;
-        java.util.Arrays.fill(outR, 0, len, 0.0);
-        java.util.Arrays.fill(outI, 0, len, 0.0);
+        boolean started = false;
         for (int k = 0; k < terms; k++) {
             double c = w[k];
-            if (c == 0.0) {
-                continue;
+            if (c != 0.0) {
+                axpy(started, c, gr[k], gi[k], outR, outI, len);
+                started = true;
             }
-            double[] r = gr[k], i = gi[k];
+        }
+        if (g0r != null && w0 != 0.0) {
+            axpy(started, w0, g0r, g0i, outR, outI, len);
+            started = true;
+        }
+        if (!started) {
+            java.util.Arrays.fill(outR, 0, len, 0.0);
+            java.util.Arrays.fill(outI, 0, len, 0.0);
+        }
+    }
+
+    /**
+     * out_j = Σ_k weights[j][k] G_k for j &lt; count, with the weights indexed over {@link #generators()} (G_0 last
+     * when present). The first generator assigns instead of adding, so no output is cleared first; the sum runs in
+     * the same order as {@link #combine}, so both give the same bits for the same weights.
+     */
+    void combineAll(int count, double[][] weights, double[][] outR, double[][] outI) {
+        int len = m * m, n = generators();
+        for (int j = 0; j < count; j++) {
+            double[] wj = weights[j], oR = outR[j], oI = outI[j];
+            boolean started = false;
+            for (int k = 0; k < n; k++) {
+                double c = wj[k];
+                if (c != 0.0) {
+                    axpy(started, c, generatorRe(k), generatorIm(k), oR, oI, len);
+                    started = true;
+                }
+            }
+            if (!started) {
+                java.util.Arrays.fill(oR, 0, len, 0.0);
+                java.util.Arrays.fill(oI, 0, len, 0.0);
+            }
+        }
+    }
+
+    /** out = c·G (assign) or out += c·G (add). */
+    private static void axpy(boolean add, double c, double[] r, double[] i, double[] outR, double[] outI, int len) {
+        if (add) {
             for (int q = 0; q < len; q++) {
                 outR[q] += c * r[q];
                 outI[q] += c * i[q];
             }
-        }
-        if (g0r != null && w0 != 0.0) {
+        } else {
             for (int q = 0; q < len; q++) {
-                outR[q] += w0 * g0r[q];
-                outI[q] += w0 * g0i[q];
+                outR[q] = c * r[q];
+                outI[q] = c * i[q];
             }
         }
+    }
+
+    /** @return the number of generators with a weight of their own: the driven terms, then G_0 if present */
+    int generators() {
+        return g0r == null ? terms : terms + 1;
+    }
+
+    /** @return the real part of generator k (k = terms is G_0) */
+    double[] generatorRe(int k) {
+        return k < terms ? gr[k] : g0r;
+    }
+
+    /** @return the imaginary part of generator k (k = terms is G_0) */
+    double[] generatorIm(int k) {
+        return k < terms ? gi[k] : g0i;
     }
 }

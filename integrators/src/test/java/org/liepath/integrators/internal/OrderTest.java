@@ -32,6 +32,11 @@ class OrderTest {
         Function<LinearSystem, Kernel> m4 = s -> new MagnusKernel(s, 4);
         Function<LinearSystem, Kernel> m6 = s -> new MagnusKernel(s, 6);
         Function<LinearSystem, Kernel> m8 = s -> new MagnusKernel(s, 8);
+        // the same schemes with their first-level commutators from stored generator pairs (forced: the cost rule
+        // would keep the product route for these 3×3 systems)
+        Function<LinearSystem, Kernel> p4 = s -> new MagnusKernel(s, 4, true);
+        Function<LinearSystem, Kernel> p6 = s -> new MagnusKernel(s, 6, true);
+        Function<LinearSystem, Kernel> p8 = s -> new MagnusKernel(s, 8, true);
         Function<LinearSystem, Kernel> cf4 = s -> new CommutatorFreeKernel(s, Tables.GAUSS2, Tables.CF4_2, 4);
         Function<LinearSystem, Kernel> opt = s -> new CommutatorFreeKernel(s, Tables.GAUSS3, Tables.CF4_3OPT, 4);
         Function<LinearSystem, Kernel> cf6 = s -> new CommutatorFreeKernel(s, Tables.GAUSS3, Tables.CF6_6, 6);
@@ -45,6 +50,9 @@ class OrderTest {
                 Arguments.of("Magnus 4", m4, 4, four),
                 Arguments.of("Magnus 6", m6, 6, six),
                 Arguments.of("Magnus 8", m8, 8, eight),
+                Arguments.of("Magnus 4, generator pairs", p4, 4, four),
+                Arguments.of("Magnus 6, generator pairs", p6, 6, six),
+                Arguments.of("Magnus 8, generator pairs", p8, 8, eight),
                 Arguments.of("CF4:2", cf4, 4, four),
                 Arguments.of("CF4:3Opt", opt, 4, four),
                 Arguments.of("CF6 six exponentials", cf6, 6, six));
