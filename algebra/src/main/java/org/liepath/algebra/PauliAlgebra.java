@@ -154,6 +154,11 @@ public final class PauliAlgebra {
     }
 
     private static void put(long[] dst, int off, PauliString p, int w) {
+        if (w == 1) {
+            dst[off] = p.xWords()[0];
+            dst[off + 1] = p.zWords()[0];
+            return;
+        }
         System.arraycopy(p.xWords(), 0, dst, off, w);
         System.arraycopy(p.zWords(), 0, dst, off + w, w);
     }

@@ -93,7 +93,11 @@ public final class PauliClosure {
         // grows beyond that when needed
         StringTable t = new StringTable(words, Math.min(1 << 12, count * count));
         for (int g = 0; g < count; g++) {
-            t.intern(gens, g * 2 * words);
+            if (words == 1) {
+                t.intern1(gens[2 * g], gens[2 * g + 1]);
+            } else {
+                t.intern(gens, g * 2 * words);
+            }
             if (t.size() > maxDimension) {
                 throw limit(maxDimension);
             }
