@@ -10,6 +10,7 @@ import org.liepath.core.Operator;
 import org.liepath.core.ProgressListener;
 import org.liepath.core.StateVector;
 import org.liepath.core.internal.Require;
+import org.liepath.integrators.internal.FixedStepError;
 import org.liepath.integrators.internal.Kernel;
 import org.liepath.integrators.internal.LinearSystem;
 import org.liepath.integrators.internal.PiecewiseKernel;
@@ -373,17 +374,22 @@ public final class Evolve {
         } else {
             Kernel k = adaptive && sys.isPiecewiseConstant() ? new PiecewiseKernel(sys) : s.kernel(sys);
             r = Runner.run(k, spec);
+            if (!adaptive && r.outcome == Run.Outcome.SUCCESS) {
+                // made only if asked for, on a kernel of its own (the run's counters stay as they are)
+                return wrap(s, mode, n, r, () -> FixedStepError.estimate(s.kernel(sys), spec));
+            }
         }
-        return wrap(s, mode, n, r);
+        return wrap(s, mode, n, r, null);
     }
 
-    private static Evolution wrap(Scheme s, Trajectory.Mode mode, int n, Run.Result r) {
+    private static Evolution wrap(Scheme s, Trajectory.Mode mode, int n, Run.Result r,
+                                  java.util.function.DoubleSupplier deferredEstimate) {
         Status status = status(Status.Kind.valueOf(r.outcome.name()), r.message, r.monitorFailure,
                 r.observerFailure, r.timeReached);
         Stats stats = new Stats(r.accepted, r.rejected, r.evaluations, r.exponentials, r.commutators, 0, r.nanos,
                 r.monitorFailure, r.observerFailure);
         Trajectory traj = new Trajectory(mode, n, r.sampleTimes, r.sampleRe, r.sampleIm);
-        return new Evolution(s, status, mode, n, r.xr, r.xi, traj, stats, r.errorSum, null);
+        return new Evolution(s, status, mode, n, r.xr, r.xi, traj, stats, r.errorSum, deferredEstimate, null);
     }
 
     private static Status status(Status.Kind kind, String message, String monitorFailure, String observerFailure,
