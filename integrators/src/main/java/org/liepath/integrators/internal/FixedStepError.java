@@ -38,24 +38,12 @@ public final class FixedStepError {
         int samples = Math.min(n, SAMPLES);
         double dt = (spec.t1 - spec.t0) / n;
         double[] yr = new double[len], yi = new double[len];
-        double[] b = kernel.sys.breakpoints;
         double sum = 0;
         try {
             for (int j = 0; j < samples; j++) {
                 int k = (int) ((j + 0.5) * n / samples);
                 double tk = spec.t0 + k * dt, end = k == n - 1 ? spec.t1 : spec.t0 + (k + 1) * dt;
-                double lo = Math.min(tk, end), hi = Math.max(tk, end), eps = 1e-12 * Math.abs(dt);
-                double cur = tk;
-                // the pieces between breakpoints, in the direction of the step, as Kernel.advance takes them
-                for (int q = 0; q < b.length; q++) {
-                    int idx = dt > 0 ? q : b.length - 1 - q;
-                    double bp = b[idx];
-                    if (bp > lo + eps && bp < hi - eps) {
-                        sum += kernel.trial(cur, bp - cur, p, spec.x0r, spec.x0i, yr, yi);
-                        cur = bp;
-                    }
-                }
-                sum += kernel.trial(cur, end - cur, p, spec.x0r, spec.x0i, yr, yi);
+                sum += kernel.trialPieces(tk, end - tk, p, spec.x0r, spec.x0i, yr, yi);
             }
         } catch (DriveException e) {
             return Double.NaN;

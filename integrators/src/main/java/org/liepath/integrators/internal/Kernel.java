@@ -105,40 +105,71 @@ public abstract class Kernel {
      * breakpoint closer to an end than 1e-12·|dt| is ignored).
      */
     public final void advance(double t, double dt, int p, double[] xr, double[] xi) {
-        double[] b = sys.breakpoints;
-        if (b.length == 0) {
-            steps++;
+        int first = interior(t, dt);
+        steps++;
+        if (first < 0) {
+            // the whole step as given (not (t + dt) − t, which may round differently from dt)
             step(t, dt, p, xr, xi);
             return;
+        }
+        double[] b = sys.breakpoints;
+        double cur = t;
+        for (int q = 0, count = lastInterior - first; q <= count; q++) {
+            int k = dt > 0 ? first + q : lastInterior - q;
+            steps++;
+            step(cur, b[k] - cur, p, xr, xi);
+            cur = b[k];
+        }
+        step(cur, t + dt - cur, p, xr, xi);
+    }
+
+    /**
+     * The local error estimates of {@link #trial} summed over the pieces into which {@link #advance} would split
+     * [t, t+dt], each piece measured on the same state X (not modified; the trial results land in (yr, yi)).
+     *
+     * @return the sum of the pieces' relative local error estimates
+     */
+    public final double trialPieces(double t, double dt, int p, double[] xr, double[] xi, double[] yr, double[] yi) {
+        int first = interior(t, dt);
+        if (first < 0) {
+            return trial(t, dt, p, xr, xi, yr, yi);
+        }
+        double[] b = sys.breakpoints;
+        double cur = t, sum = 0;
+        for (int q = 0, count = lastInterior - first; q <= count; q++) {
+            int k = dt > 0 ? first + q : lastInterior - q;
+            sum += trial(cur, b[k] - cur, p, xr, xi, yr, yi);
+            cur = b[k];
+        }
+        return sum + trial(cur, t + dt - cur, p, xr, xi, yr, yi);
+    }
+
+    /** Index of the last breakpoint found by the latest {@link #interior} call. */
+    private int lastInterior;
+
+    /**
+     * The breakpoints strictly inside [t, t+dt] (ignoring those within 1e-12·|dt| of an end), as the index range
+     * [first, {@link #lastInterior}] of the ascending breakpoints.
+     *
+     * @return the first index, or −1 if there is none
+     */
+    private int interior(double t, double dt) {
+        double[] b = sys.breakpoints;
+        if (b.length == 0) {
+            return -1;
         }
         double end = t + dt;
         double lo = Math.min(t, end), hi = Math.max(t, end), eps = 1e-12 * Math.abs(dt);
         int first = lowerBound(b, lo + eps);
         if (first >= b.length || b[first] >= hi - eps) {
-            steps++;
-            step(t, dt, p, xr, xi);
-            return;
+            return -1;
         }
-        double cur = t;
-        if (dt > 0) {
-            for (int k = first; k < b.length && b[k] < hi - eps; k++) {
-                steps++;
-                step(cur, b[k] - cur, p, xr, xi);
-                cur = b[k];
-            }
-        } else {
-            int last = first;
-            while (last + 1 < b.length && b[last + 1] < hi - eps) {
-                last++;
-            }
-            for (int k = last; k >= first; k--) {
-                steps++;
-                step(cur, b[k] - cur, p, xr, xi);
-                cur = b[k];
-            }
+        int last = first;
+        while (last + 1 < b.length && b[last + 1] < hi - eps) {
+            last++;
         }
-        steps++;
-        step(cur, end - cur, p, xr, xi);
+        lastInterior = last;
+        return first;
     }
 
     /** @return the first index with b[index] ≥ x */
