@@ -116,12 +116,21 @@ class DenseStructuredProductTest {
         for (int i = 0; i < n; i++) {
             for (int j = i; j < n; j++) {
                 int ij = i * n + j, ji = j * n + i;
-                assertTrue(c[0][ij] == f[0][ij] && c[1][ij] == f[1][ij], "upper entry (" + i + ", " + j + ")");
                 double bound = 0;
                 for (int k = 0; k < n; k++) {
                     bound += absA[j * n + k] * absB[k * n + i];
                 }
                 bound *= 4 * Math.sqrt(2) * gamma;
+                if (i != j) {
+                    assertTrue(c[0][ij] == f[0][ij] && c[1][ij] == f[1][ij], "upper entry (" + i + ", " + j + ")");
+                } else {
+                    // the diagonal's kept plane is the full product's; the other is exactly 0 in the structured
+                    // result, while the full product leaves a rounding residue there when its kernel fuses
+                    // multiply–adds (the two products that cancel are then rounded differently)
+                    int kept = herm ? 0 : 1;
+                    assertTrue(c[kept][ij] == f[kept][ij], "diagonal entry " + i);
+                    assertTrue(Math.abs(f[1 - kept][ij]) <= bound, "full product's vanishing plane at " + i);
+                }
                 double d = Math.hypot(c[0][ji] - f[0][ji], c[1][ji] - f[1][ji]);
                 assertTrue(d <= bound, "n = " + n + ", lower entry (" + j + ", " + i + "): " + d + " > " + bound);
             }

@@ -284,6 +284,53 @@ class ExpmAntiHermitianTest {
         }
     }
 
+    @ParameterizedTest(name = "2j = {0}")
+    @ValueSource(ints = {2, 3, 4, 7, 16})
+    void energyOffsetsAreAPhaseAndLowerTheDegree(int twoJ) {
+        // exp(−i(θJ_y + E·I)) = e^{−iE} d^j(θ), since E·I commutes with J_y; reference: Wigner's formula as above. The
+        // offset E moves every diagonal entry of A by −iE; the Gershgorin centre shift removes it, so the degree and
+        // scaling must be those of θJ_y alone (mutation guard: without the shift, E = 40 forces degree 13 with
+        // squarings). Tolerance: the Wigner tolerance above with ‖A‖₁ of the offset exponent, since the shift's
+        // rounding of the diagonal is a backward error of u|E| (Ward 1977, see Expm#centre).
+        int n = twoJ + 1;
+        for (double theta : new double[]{0.01, 0.4, 1.3}) {
+            for (double e : new double[]{-0.3, 2.0, 40.0}) {
+                double[][] a = {spinRotationExponent(twoJ, theta), new double[n * n]};
+                Expm plainWs = new Expm(n);
+                incrementSkew(plainWs, a);
+                int plainCost = plainWs.lastCost();
+                for (int i = 0; i < n; i++) {
+                    a[1][i * n + i] = -e;
+                }
+                double norm = Dense.norm1(n, a[0], a[1]);
+                Expm ws = new Expm(n);
+                double[][] got = incrementSkew(ws, a);
+                assertTrue(ws.lastCost() <= plainCost, "2j = " + twoJ + ", θ = " + theta + ", E = " + e
+                        + ": cost " + ws.lastCost() + " > " + plainCost + " of the offset-free exponent");
+                if (Expm.cost(norm) > plainCost) {
+                    // the offset alone raised the cost: the shift must have removed it (the hull is symmetric
+                    // about −E, as J_y has a zero diagonal)
+                    assertEquals(-e, ws.lastShift(), 4 * U * Math.abs(e) * n, "shift");
+                }
+                double tol0 = 10 * n * U * Math.max(1, norm);
+                double cr = Math.cos(e), ci = -Math.sin(e);
+                for (int row = 0; row < n; row++) {
+                    for (int col = 0; col < n; col++) {
+                        double[] d = wignerSmallD(twoJ, twoJ - 2 * row, twoJ - 2 * col, theta);
+                        double wantR = cr * d[0] - (row == col ? 1 : 0), wantI = ci * d[0];
+                        double tol = tol0 + wignerRoundingFactor(twoJ) * U * d[1] + 4 * U;
+                        int k = row * n + col;
+                        assertTrue(Math.abs(got[0][k] - wantR) <= tol && Math.abs(got[1][k] - wantI) <= tol,
+                            "2j = " + twoJ + ", θ = " + theta + ", E = " + e + ", entry (" + row + ", " + col + "): "
+                                + got[0][k] + " + " + got[1][k] + "i vs " + wantR + " + " + wantI + "i");
+                    }
+                }
+                double defect = unitarityDefect(n, got);
+                assertTrue(defect <= 10 * n * U * Math.max(1, norm), "unitarity " + defect);
+            }
+        }
+    }
+
     @Test
     void wignerFormulaReproducesTheSpinOneClosedForm() {
         // guards the sign and index conventions of wignerSmallD, on which the test above relies
