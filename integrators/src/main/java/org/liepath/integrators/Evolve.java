@@ -17,6 +17,7 @@ import org.liepath.integrators.internal.PiecewiseKernel;
 import org.liepath.integrators.internal.ReferenceRunner;
 import org.liepath.integrators.internal.Run;
 import org.liepath.integrators.internal.Runner;
+import org.liepath.integrators.internal.TighterRunError;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -371,6 +372,10 @@ public final class Evolve {
         Run.Result r;
         if (s.kind == Scheme.Kind.REFERENCE) {
             r = ReferenceRunner.run(sys, spec);
+            if (r.outcome == Run.Outcome.SUCCESS) {
+                Run.Result first = r;
+                return wrap(s, mode, n, r, () -> TighterRunError.reference(sys, spec, first));
+            }
         } else {
             Kernel k = adaptive && sys.isPiecewiseConstant() ? new PiecewiseKernel(sys) : s.kernel(sys);
             r = Runner.run(k, spec);
@@ -508,7 +513,45 @@ public final class Evolve {
             im.add(fi);
         }
         Trajectory traj = new Trajectory(mode, dim, times, re, im);
-        return new Evolution(s, st, mode, dim, fr, fi, traj, stats, Double.NaN, coords);
+        java.util.function.DoubleSupplier deferred = null;
+        if (kind == Status.Kind.SUCCESS && fr != null) {
+            double[] gr = fr, gi = fi;
+            Hamiltonian ham = h;
+            StateVector state = psi;
+            double from = t0, to = t1;
+            deferred = () -> weiNormanEstimate(s, ham, from, to, tol, state, gr, gi);
+        }
+        return new Evolution(s, st, mode, dim, fr, fi, traj, stats, Double.NaN, deferred, coords);
+    }
+
+    /** {@link TighterRunError} for a Wei–Norman run: the chart integrated again at the tighter tolerance. */
+    private static double weiNormanEstimate(Scheme s, Hamiltonian h, double t0, double t1, double tol,
+                                            StateVector psi, double[] fr, double[] fi) {
+        double tight = TighterRunError.tighter(tol);
+        if (Double.isNaN(tight)) {
+            return Double.NaN;
+        }
+        CoordinateRun cr;
+        try {
+            cr = s.chart.integrate(h, t0, t1, tight, new double[0], ProgressListener.NONE);
+        } catch (DriveException e) {
+            return Double.NaN;
+        }
+        if (cr.cancelled || cr.failure != null || cr.propagator == null) {
+            return Double.NaN;
+        }
+        Operator u = cr.propagator;
+        double[] yr, yi;
+        if (psi != null) {
+            StateVector out = psi.apply(u);
+            yr = new double[out.dim()];
+            yi = new double[out.dim()];
+            out.copyTo(yr, yi);
+        } else {
+            yr = u.reArray();
+            yi = u.imArray();
+        }
+        return yr.length != fr.length ? Double.NaN : TighterRunError.relativeDistance(fr.length, fr, fi, yr, yi);
     }
 
     private static void addSample(List<Double> times, List<double[]> re, List<double[]> im, double t, Operator u,
