@@ -80,7 +80,7 @@ public final class Dense {
      * detection. Both kernels round differently (a fused step rounds once where the plain one rounds twice), so
      * results agree across machines to rounding, not bit for bit; on one machine every path is deterministic.
      */
-    static final boolean FUSED = detectFused();
+    public static final boolean FUSED = detectFused();
 
     /**
      * Largest dimension for the fused kernel: its 2×2 blocks walk two columns of b over all k, which stays in the

@@ -402,7 +402,11 @@ public abstract class Kernel {
     /** s·[A, B] without counting (also the route of the stored generator pairs, see {@link GeneratorPairs}). */
     final void bracket(double s, double[] ar, double[] ai, double[] br, double[] bi, double[] cr, double[] ci) {
         if (skew && m == 3) {
-            skewBracket3(s, ar, ai, br, bi, cr, ci);
+            if (Dense.FUSED) {
+                skewBracket3Fused(s, ar, ai, br, bi, cr, ci);
+            } else {
+                skewBracket3(s, ar, ai, br, bi, cr, ci);
+            }
             return;
         }
         if (skew && m == 2) {
@@ -464,7 +468,7 @@ public abstract class Kernel {
      * s·(P − P†) with P = AB for anti-Hermitian 3×3 operands, unrolled so that the entries of P stay in registers
      * instead of passing through a scratch product (same arithmetic as the general route up to summation order).
      */
-    private static void skewBracket3(double s, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
+    static void skewBracket3(double s, double[] ar, double[] ai, double[] br, double[] bi, double[] cr,
                                       double[] ci) {
         double ar00 = ar[0], ai00 = ai[0], ar01 = ar[1], ai01 = ai[1], ar02 = ar[2], ai02 = ai[2];
         double ar10 = ar[3], ai10 = ai[3], ar11 = ar[4], ai11 = ai[4], ar12 = ar[5], ai12 = ai[5];
@@ -505,6 +509,98 @@ public abstract class Kernel {
         ci[5] = im12;
         cr[7] = -re12;
         ci[7] = im12;
+    }
+
+    /**
+     * {@link #skewBracket3} with fused multiply–adds, for machines with hardware FMA ({@link Dense#FUSED}): each
+     * entry of P − P† is one chain over its twelve (diagonal: six) products, rounded once per term.
+     */
+    static void skewBracket3Fused(double s, double[] ar, double[] ai, double[] br, double[] bi,
+                                          double[] cr, double[] ci) {
+        double ar00 = ar[0], ar01 = ar[1], ar02 = ar[2];
+        double ar10 = ar[3], ar11 = ar[4], ar12 = ar[5];
+        double ar20 = ar[6], ar21 = ar[7], ar22 = ar[8];
+        double ai00 = ai[0], ai01 = ai[1], ai02 = ai[2];
+        double ai10 = ai[3], ai11 = ai[4], ai12 = ai[5];
+        double ai20 = ai[6], ai21 = ai[7], ai22 = ai[8];
+        double br00 = br[0], br01 = br[1], br02 = br[2];
+        double br10 = br[3], br11 = br[4], br12 = br[5];
+        double br20 = br[6], br21 = br[7], br22 = br[8];
+        double bi00 = bi[0], bi01 = bi[1], bi02 = bi[2];
+        double bi10 = bi[3], bi11 = bi[4], bi12 = bi[5];
+        double bi20 = bi[6], bi21 = bi[7], bi22 = bi[8];
+        double d0 = ar00 * bi00;
+        d0 = Math.fma(ai00, br00, d0); d0 = Math.fma(ar01, bi10, d0);
+        d0 = Math.fma(ai01, br10, d0); d0 = Math.fma(ar02, bi20, d0);
+        d0 = Math.fma(ai02, br20, d0);
+        cr[0] = 0.0;
+        ci[0] = s * (2 * d0);
+        double d1 = ar10 * bi01;
+        d1 = Math.fma(ai10, br01, d1); d1 = Math.fma(ar11, bi11, d1);
+        d1 = Math.fma(ai11, br11, d1); d1 = Math.fma(ar12, bi21, d1);
+        d1 = Math.fma(ai12, br21, d1);
+        cr[4] = 0.0;
+        ci[4] = s * (2 * d1);
+        double d2 = ar20 * bi02;
+        d2 = Math.fma(ai20, br02, d2); d2 = Math.fma(ar21, bi12, d2);
+        d2 = Math.fma(ai21, br12, d2); d2 = Math.fma(ar22, bi22, d2);
+        d2 = Math.fma(ai22, br22, d2);
+        cr[8] = 0.0;
+        ci[8] = s * (2 * d2);
+        double x01 = ar00 * br01;
+        x01 = Math.fma(-ai00, bi01, x01); x01 = Math.fma(ar01, br11, x01);
+        x01 = Math.fma(-ai01, bi11, x01); x01 = Math.fma(ar02, br21, x01);
+        x01 = Math.fma(-ai02, bi21, x01); x01 = Math.fma(-ar10, br00, x01);
+        x01 = Math.fma(ai10, bi00, x01); x01 = Math.fma(-ar11, br10, x01);
+        x01 = Math.fma(ai11, bi10, x01); x01 = Math.fma(-ar12, br20, x01);
+        x01 = Math.fma(ai12, bi20, x01);
+        double y01 = ar00 * bi01;
+        y01 = Math.fma(ai00, br01, y01); y01 = Math.fma(ar01, bi11, y01);
+        y01 = Math.fma(ai01, br11, y01); y01 = Math.fma(ar02, bi21, y01);
+        y01 = Math.fma(ai02, br21, y01); y01 = Math.fma(ar10, bi00, y01);
+        y01 = Math.fma(ai10, br00, y01); y01 = Math.fma(ar11, bi10, y01);
+        y01 = Math.fma(ai11, br10, y01); y01 = Math.fma(ar12, bi20, y01);
+        y01 = Math.fma(ai12, br20, y01);
+        cr[1] = s * x01;
+        ci[1] = s * y01;
+        cr[3] = -(s * x01);
+        ci[3] = s * y01;
+        double x02 = ar00 * br02;
+        x02 = Math.fma(-ai00, bi02, x02); x02 = Math.fma(ar01, br12, x02);
+        x02 = Math.fma(-ai01, bi12, x02); x02 = Math.fma(ar02, br22, x02);
+        x02 = Math.fma(-ai02, bi22, x02); x02 = Math.fma(-ar20, br00, x02);
+        x02 = Math.fma(ai20, bi00, x02); x02 = Math.fma(-ar21, br10, x02);
+        x02 = Math.fma(ai21, bi10, x02); x02 = Math.fma(-ar22, br20, x02);
+        x02 = Math.fma(ai22, bi20, x02);
+        double y02 = ar00 * bi02;
+        y02 = Math.fma(ai00, br02, y02); y02 = Math.fma(ar01, bi12, y02);
+        y02 = Math.fma(ai01, br12, y02); y02 = Math.fma(ar02, bi22, y02);
+        y02 = Math.fma(ai02, br22, y02); y02 = Math.fma(ar20, bi00, y02);
+        y02 = Math.fma(ai20, br00, y02); y02 = Math.fma(ar21, bi10, y02);
+        y02 = Math.fma(ai21, br10, y02); y02 = Math.fma(ar22, bi20, y02);
+        y02 = Math.fma(ai22, br20, y02);
+        cr[2] = s * x02;
+        ci[2] = s * y02;
+        cr[6] = -(s * x02);
+        ci[6] = s * y02;
+        double x12 = ar10 * br02;
+        x12 = Math.fma(-ai10, bi02, x12); x12 = Math.fma(ar11, br12, x12);
+        x12 = Math.fma(-ai11, bi12, x12); x12 = Math.fma(ar12, br22, x12);
+        x12 = Math.fma(-ai12, bi22, x12); x12 = Math.fma(-ar20, br01, x12);
+        x12 = Math.fma(ai20, bi01, x12); x12 = Math.fma(-ar21, br11, x12);
+        x12 = Math.fma(ai21, bi11, x12); x12 = Math.fma(-ar22, br21, x12);
+        x12 = Math.fma(ai22, bi21, x12);
+        double y12 = ar10 * bi02;
+        y12 = Math.fma(ai10, br02, y12); y12 = Math.fma(ar11, bi12, y12);
+        y12 = Math.fma(ai11, br12, y12); y12 = Math.fma(ar12, bi22, y12);
+        y12 = Math.fma(ai12, br22, y12); y12 = Math.fma(ar20, bi01, y12);
+        y12 = Math.fma(ai20, br01, y12); y12 = Math.fma(ar21, bi11, y12);
+        y12 = Math.fma(ai21, br11, y12); y12 = Math.fma(ar22, bi21, y12);
+        y12 = Math.fma(ai22, br21, y12);
+        cr[5] = s * x12;
+        ci[5] = s * y12;
+        cr[7] = -(s * x12);
+        ci[7] = s * y12;
     }
 
     /** out = a X + b Y (planar m×m); out may alias X or Y. */
