@@ -42,6 +42,40 @@ public final class LinearSystem {
         this.breakpoints = breakpoints;
         this.piecewiseConstant = piecewiseConstant;
         this.skewHermitian = skewHermitian;
+        int n = generators(), len = m * m;
+        spRe = new int[n][];
+        spIm = new int[n][];
+        for (int k = 0; k < n; k++) {
+            int[] re = nonzeros(generatorRe(k), len), im = nonzeros(generatorIm(k), len);
+            if (re.length + im.length <= len / 2) {
+                spRe[k] = re;
+                spIm[k] = im;
+            }
+        }
+    }
+
+    /**
+     * Indices of the nonzero entries of each generator's two planes when together they fill at most a quarter of
+     * them (null otherwise): Hamiltonians built from Pauli strings, ladder operators or level projectors, and their
+     * Liouville-space commutators, have a few nonzeros per row, and −i·(real symmetric) leaves a whole plane zero.
+     * {@link #combine} then scatters these entries instead of sweeping all m² of them.
+     */
+    private final int[][] spRe, spIm;
+
+    private static int[] nonzeros(double[] x, int len) {
+        int count = 0;
+        for (int q = 0; q < len; q++) {
+            if (x[q] != 0.0) {
+                count++;
+            }
+        }
+        int[] idx = new int[count];
+        for (int q = 0, j = 0; q < len; q++) {
+            if (x[q] != 0.0) {
+                idx[j++] = q;
+            }
+        }
+        return idx;
     }
 
     /** X' = −i H(t) X. */
@@ -119,45 +153,59 @@ public final class LinearSystem {
 
     /** out = Σ_k w_k G_k + w0 G_0 (planar m×m). */
     public void combine(double[] w, double w0, double[] outR, double[] outI) {
-        int len = m * m;
-        boolean started = false;
-        for (int k = 0; k < terms; k++) {
-            double c = w[k];
-            if (c != 0.0) {
-                axpy(started, c, gr[k], gi[k], outR, outI, len);
-                started = true;
-            }
-        }
-        if (g0r != null && w0 != 0.0) {
-            axpy(started, w0, g0r, g0i, outR, outI, len);
-            started = true;
-        }
-        if (!started) {
-            java.util.Arrays.fill(outR, 0, len, 0.0);
-            java.util.Arrays.fill(outI, 0, len, 0.0);
-        }
+        sum(w, w0, outR, outI);
     }
 
     /**
      * out_j = Σ_k weights[j][k] G_k for j &lt; count, with the weights indexed over {@link #generators()} (G_0 last
-     * when present). The first generator assigns instead of adding, so no output is cleared first; the sum runs in
-     * the same order as {@link #combine}, so both give the same bits for the same weights.
+     * when present), each by {@link #sum}, so {@link #combine} gives the same bits for the same weights.
      */
     void combineAll(int count, double[][] weights, double[][] outR, double[][] outI) {
-        int len = m * m, n = generators();
+        boolean g0 = g0r != null;
         for (int j = 0; j < count; j++) {
-            double[] wj = weights[j], oR = outR[j], oI = outI[j];
-            boolean started = false;
-            for (int k = 0; k < n; k++) {
-                double c = wj[k];
-                if (c != 0.0) {
-                    axpy(started, c, generatorRe(k), generatorIm(k), oR, oI, len);
-                    started = true;
-                }
+            double[] wj = weights[j];
+            sum(wj, g0 ? wj[terms] : 0.0, outR[j], outI[j]);
+        }
+    }
+
+    /**
+     * out = Σ_{k &lt; terms} wk[k] G_k + w0 G_0 over the nonzero weights, in index order (G_0 last). When one of
+     * them is stored sparse, out is cleared and every term added (sparse ones scattered): each entry receives the
+     * same nonzero addends in the same order as in a dense sweep, so the value is the same up to the sign of an
+     * exact zero. Otherwise the first term assigns and the others add. A non-finite weight poisons only the
+     * entries its generator touches, which is enough for the non-finite check of the step that follows.
+     */
+    private void sum(double[] wk, double w0, double[] oR, double[] oI) {
+        int len = m * m, n = generators();
+        boolean anySparse = false, any = false;
+        for (int k = 0; k < n; k++) {
+            if ((k < terms ? wk[k] : w0) != 0.0) {
+                any = true;
+                anySparse |= spRe[k] != null;
             }
-            if (!started) {
-                java.util.Arrays.fill(oR, 0, len, 0.0);
-                java.util.Arrays.fill(oI, 0, len, 0.0);
+        }
+        if (!any || anySparse) {
+            java.util.Arrays.fill(oR, 0, len, 0.0);
+            java.util.Arrays.fill(oI, 0, len, 0.0);
+        }
+        boolean started = anySparse;
+        for (int k = 0; k < n; k++) {
+            double c = k < terms ? wk[k] : w0;
+            if (c == 0.0) {
+                continue;
+            }
+            double[] r = generatorRe(k), i = generatorIm(k);
+            int[] sr = spRe[k];
+            if (sr != null) {
+                for (int q : sr) {
+                    oR[q] += c * r[q];
+                }
+                for (int q : spIm[k]) {
+                    oI[q] += c * i[q];
+                }
+            } else {
+                axpy(started, c, r, i, oR, oI, len);
+                started = true;
             }
         }
     }
