@@ -161,7 +161,11 @@ public final class Expm {
                     scalarMinusOne(ar[0], ai[0], outRe, outIm);
                 }
             } else {
-                exp2(1.0, 0.0, ar, ai, outRe, outIm, increment);
+                if (skew && increment) {
+                    skewIncrement2(ar, ai, outRe, outIm);
+                } else {
+                    exp2(1.0, 0.0, ar, ai, outRe, outIm, increment);
+                }
             }
             return;
         }
@@ -512,17 +516,41 @@ public final class Expm {
         return lastShift;
     }
 
-    /** Off-diagonal modulus sums of the columns of the last anti-Hermitian load. */
-    private final double[] colSums;
-    /** ‖A − icI‖₁ after a shift by {@link #centre}. */
-    private double shiftedNorm;
-
     /**
-     * Loads the anti-Hermitian part of scale·A and returns its 1-norm; r[j] receives the off-diagonal modulus sum of
-     * column j. Each modulus serves both entries of its mirrored pair.
+     * exp(A) − I for an anti-Hermitian 2×2 A (planar; real diagonal parts ignored, as loaded), in closed form: with
+     * A = iφI + B, φ = (Im a₀₀ + Im a₁₁)/2 and B traceless anti-Hermitian, B² = −ω²I where
+     * ω² = h² + |a₀₁|², h = (Im a₀₀ − Im a₁₁)/2, so exp(A) = e^{iφ}(cos ω I + (sin ω/ω) B) (the SU(2) rotation
+     * formula; common practice, e.g. J.J. Sakurai, Modern Quantum Mechanics, rev. ed. 1994, eq. (3.2.45) [from
+     * memory]). The diagonal of the increment is formed without cancellation: e^{iφ} cos ω − 1 has real part
+     * −2 sin²(φ/2) cos ω − 2 sin²(ω/2). Four sines and cosines of half angles and one square root; nothing else
+     * of the general {@link #exp2} is needed (its series and complex square root serve non-normal matrices).
      */
-    private double load(double scale, double[] inRe, double[] inIm, double[] r) {
-        java.util.Arrays.fill(r, 0.0);
+    private static void skewIncrement2(double[] ar, double[] ai, double[] outRe, double[] outIm) {
+        double a = ai[0], d = ai[3], p = ar[1], q = ai[1];
+        double phi = 0.5 * (a + d), h = 0.5 * (a - d);
+        double omega = Math.sqrt(h * h + p * p + q * q);
+        double sw = Math.sin(0.5 * omega), cw = Math.cos(0.5 * omega);
+        double sp = Math.sin(0.5 * phi), cp = Math.cos(0.5 * phi);
+        double c = 1 - 2 * sw * sw;                          // cos ω
+        double s = omega == 0 ? 1.0 : 2 * sw * cw / omega;   // sin ω / ω
+        double sphi = 2 * sp * cp, cphi = 1 - 2 * sp * sp;   // sin φ, cos φ
+        double base = -2 * sp * sp * c - 2 * sw * sw;        // cos φ cos ω − 1
+        double sh = s * h;
+        outRe[0] = base - sphi * sh;
+        outIm[0] = sphi * c + cphi * sh;
+        outRe[3] = base + sphi * sh;
+        outIm[3] = sphi * c - cphi * sh;
+        // e^{iφ} s B_01 with B_01 = p + iq, and e^{iφ} s B_10 with B_10 = −p + iq
+        double xr = s * (cphi * p - sphi * q), xi = s * (cphi * q + sphi * p);
+        double yr = s * (-cphi * p - sphi * q), yi = s * (cphi * q - sphi * p);
+        outRe[1] = xr;
+        outIm[1] = xi;
+        outRe[2] = yr;
+        outIm[2] = yi;
+    }
+
+    /** Loads the anti-Hermitian part (A − A†)/2 of scale·A into the workspace. */
+    private void loadSkew(double scale, double[] inRe, double[] inIm) {
         for (int i = 0; i < n; i++) {
             int in = i * n;
             ar[in + i] = 0.0;
@@ -536,6 +564,28 @@ public final class Expm {
                 ai[in + j] = im;
                 ar[jn + i] = -re;
                 ai[jn + i] = im;
+            }
+        }
+    }
+
+    /** Off-diagonal modulus sums of the columns of the last anti-Hermitian load. */
+    private final double[] colSums;
+    /** ‖A − icI‖₁ after a shift by {@link #centre}. */
+    private double shiftedNorm;
+
+    /**
+     * Loads the anti-Hermitian part of scale·A and returns its 1-norm; r[j] receives the off-diagonal modulus sum of
+     * column j. Each modulus serves both entries of its mirrored pair.
+     */
+    private double load(double scale, double[] inRe, double[] inIm, double[] r) {
+        loadSkew(scale, inRe, inIm);
+        if (n <= 2) {
+            return Double.NaN; // the closed forms need no norm
+        }
+        java.util.Arrays.fill(r, 0.0);
+        for (int i = 0; i < n; i++) {
+            for (int j = i + 1; j < n; j++) {
+                double re = ar[i * n + j], im = ai[i * n + j];
                 double mod = Math.sqrt(re * re + im * im);
                 r[i] += mod;
                 r[j] += mod;

@@ -153,17 +153,64 @@ class ExpmAntiHermitianTest {
     }
 
     @ParameterizedTest(name = "seed {0}")
-    @MethodSource("org.liepath.testing.Seeds#fewCases")
-    void closedFormsOfOrdersOneAndTwoAreTheGeneralOnes(long seed) {
-        // n ≤ 2 goes through the closed forms of the general path on the same (exactly anti-Hermitian) input, so
-        // the results are the same numbers
+    @MethodSource("org.liepath.testing.Seeds#cases")
+    void closedFormsOfOrdersOneAndTwoAgreeWithTheGeneralOnes(long seed) {
+        // n = 1 goes through the general path's scalar closed form (the same numbers); n = 2 through the SU(2)
+        // rotation formula, against the general 2×2 closed form (Cayley–Hamilton, see Expm#exp2), both accurate to
+        // a few ulps of max(1, ‖A‖) (the increment's entries are bounded by 2 and by ‖A‖), so they agree within
+        // 16 u max(1, ‖A‖₁); norms from 1e-6 to 1e3 cover the series branch of the general form and large angles.
+        // The SU(2) form must also be unitary to rounding.
         Random r = new Random(seed);
         int n = 1 + r.nextInt(2);
-        double[][] a = randomSkew(r, n, Math.pow(10, -6 + 8 * r.nextDouble()));
+        double norm = Math.pow(10, -6 + 9 * r.nextDouble());
+        double[][] a = randomSkew(r, n, norm);
         double[][] ref = incrementGeneral(n, a);
         double[][] got = incrementSkew(new Expm(n), a);
+        double tol = n == 1 ? 0 : 16 * U * Math.max(1, norm);
         for (int k = 0; k < n * n; k++) {
-            assertTrue(got[0][k] == ref[0][k] && got[1][k] == ref[1][k], "n = " + n + ", entry " + k);
+            assertTrue(Math.abs(got[0][k] - ref[0][k]) <= tol && Math.abs(got[1][k] - ref[1][k]) <= tol,
+                "n = " + n + ", ‖A‖₁ = " + norm + ", entry " + k + ": " + got[0][k] + " + " + got[1][k] + "i vs "
+                    + ref[0][k] + " + " + ref[1][k] + "i");
+        }
+        double defect = unitarityDefect(n, got);
+        assertTrue(defect <= 16 * U * Math.max(1, norm), "unitarity " + defect);
+    }
+
+    @org.junit.jupiter.params.ParameterizedTest(name = "θ = {0}")
+    @ValueSource(doubles = {0.0, 1e-9, 1e-4, 0.3, 2.0, Math.PI, 7.5, 300.0})
+    void qubitRotationWithPhaseIsTheClosedForm(double theta) {
+        // exp(−i(θ/2)(n·σ) − iεI) = e^{−iε}(cos(θ/2) I − i sin(θ/2) n·σ) for a unit vector n (J.J. Sakurai, Modern
+        // Quantum Mechanics, rev. ed. 1994, eq. (3.2.45) [from memory]); increments compared entry by entry, the
+        // diagonal in the cancellation-free form e^{−iε}cos(θ/2) − 1 = −2 sin²(ε/2) cos(θ/2) − 2 sin²(θ/4)
+        // − i sin ε cos(θ/2) (real and imaginary parts separately); tolerance 8 u max(1, θ).
+        double nx = 0.48, ny = -0.6, nz = 0.64, eps = 0.37 * theta + 0.1;
+        double[] re = new double[4], im = new double[4];
+        // A = −i((θ/2)(nx σx + ny σy + nz σz) + ε I)
+        double hx = 0.5 * theta * nx, hy = 0.5 * theta * ny, hz = 0.5 * theta * nz;
+        im[0] = -(hz + eps);
+        im[3] = -(-hz + eps);
+        // −i(hx σx + hy σy) off-diagonal: (0,1): −i(hx − i hy) = −hy − i hx; (1,0): −i(hx + i hy) = hy − i hx
+        re[1] = -hy;
+        im[1] = -hx;
+        re[2] = hy;
+        im[2] = -hx;
+        double[][] got = incrementSkew(new Expm(2), new double[][]{re, im});
+        double c = Math.cos(theta / 2), s = Math.sin(theta / 2), se = Math.sin(eps), ce = Math.cos(eps);
+        double s4 = Math.sin(theta / 4), s2e = Math.sin(eps / 2);
+        double base = -2 * s2e * s2e * c - 2 * s4 * s4;
+        // e^{−iε}(c − i s nz) − 1 and e^{−iε}(c + i s nz) − 1
+        double[] wantRe = {base - se * s * nz, 0, 0, base + se * s * nz};
+        double[] wantIm = {-se * c - ce * s * nz, 0, 0, -se * c + ce * s * nz};
+        // off-diagonal e^{−iε}(−i s)(nx ∓ i ny): (0,1) = e^{−iε} s(−ny − i nx), (1,0) = e^{−iε} s(ny − i nx)
+        double or01 = -s * ny, oi01 = -s * nx, or10 = s * ny, oi10 = -s * nx;
+        wantRe[1] = ce * or01 + se * oi01;
+        wantIm[1] = ce * oi01 - se * or01;
+        wantRe[2] = ce * or10 + se * oi10;
+        wantIm[2] = ce * oi10 - se * or10;
+        double tol = 8 * U * Math.max(1, theta + eps);
+        for (int k = 0; k < 4; k++) {
+            assertEquals(wantRe[k], got[0][k], tol, "θ = " + theta + ", re entry " + k);
+            assertEquals(wantIm[k], got[1][k], tol, "θ = " + theta + ", im entry " + k);
         }
     }
 

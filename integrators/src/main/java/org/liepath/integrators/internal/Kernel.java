@@ -267,7 +267,8 @@ public abstract class Kernel {
      * must not alias inputs.
      */
     protected final void increment(double scale, double[] omR, double[] omI, double[] outR, double[] outI) {
-        if (hexp == null || Math.abs(scale) * Dense.norm1(m, omR, omI) <= PADE_LIMIT) {
+        // m ≤ 2: closed forms, exact and unitary at any norm, so the norm test is skipped
+        if (hexp == null || m <= 2 || Math.abs(scale) * Dense.norm1(m, omR, omI) <= PADE_LIMIT) {
             exponentials++;
             if (hexp != null) {
                 expm.computeIncrementAntiHermitian(scale, omR, omI, outR, outI);
