@@ -413,6 +413,33 @@ class EvolveRunTest {
         }
     }
 
+    /**
+     * A large energy offset E·I only multiplies the propagator by the phase e^{−iE(t1−t0)}, since it commutes with
+     * everything (common practice). With E = 2000 each step's exponent has ‖Ω‖₁ ≈ 2000·h = 200, beyond the Padé
+     * limit before the shift; the Gershgorin-centre shift removes it, so the steps stay on the Padé route. Tolerance:
+     * the phase E·h of each of the steps is rounded to u·E·h, so over the run ≈ u·E·T = 4.4e-13, plus the
+     * scheme's own rounding (measured 0.9e-13 … 4.5e-13); 2e-12 leaves room. Unitarity as for every run.
+     */
+    @Test
+    void largeEnergyOffsetsAreAPhase() {
+        java.util.Random r = new java.util.Random(17);
+        for (int n : new int[]{3, 6}) {
+            Operator k = org.liepath.testing.Seeds.randomHermitian(r, n);
+            Operator v = org.liepath.testing.Seeds.randomHermitian(r, n);
+            Hamiltonian plain = Hamiltonian.builder(n).term(1.0, k).term(v, Drive.cosine(0.3, 1.1)).build();
+            Hamiltonian offset = Hamiltonian.builder(n).term(1.0, k.plus(Operator.identity(n).scale(2000.0)))
+                    .term(v, Drive.cosine(0.3, 1.1)).build();
+            for (Scheme s : List.of(Scheme.magnus4(), Scheme.magnus6(), Scheme.commutatorFree4Opt())) {
+                Operator u0 = Evolve.of(plain).over(0, 1).scheme(s).steps(10).run().propagator();
+                Operator u1 = Evolve.of(offset).over(0, 1).scheme(s).steps(10).run().propagator();
+                Operator want = u0.scale(new org.apache.commons.math3.complex.Complex(Math.cos(2000.0),
+                        -Math.sin(2000.0)));
+                assertEquals(0.0, u1.distance(want), 2e-12, s.name() + ", n = " + n);
+                assertEquals(0.0, u1.dagger().times(u1).distance(Operator.identity(n)), 1e-13, "unitarity");
+            }
+        }
+    }
+
     @Test
     void statsPrintAsATable() {
         Evolution ev = Evolve.of(Fixtures.drivenQubit()).over(0, 1).run();

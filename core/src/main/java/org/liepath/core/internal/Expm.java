@@ -482,6 +482,19 @@ public final class Expm {
      */
     public void computeIncrementAntiHermitian(double scale, double[] inRe, double[] inIm, double[] outRe,
                                               double[] outIm) {
+        computeIncrementAntiHermitian(scale, inRe, inIm, outRe, outIm, Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * As {@link #computeIncrementAntiHermitian(double, double[], double[], double[], double[])}, unless the 1-norm
+     * that selects degree and scaling (after the shift of {@link #centre}) exceeds maxNorm: then nothing is written
+     * and false is returned, so that a caller can take another route for large exponents without a norm pass of its
+     * own. For n ≤ 2 (closed forms, any norm) it always proceeds; a NaN input gives NaN, as the other overload.
+     *
+     * @return whether the increment was written
+     */
+    public boolean computeIncrementAntiHermitian(double scale, double[] inRe, double[] inIm, double[] outRe,
+                                                 double[] outIm, double maxNorm) {
         increment = true;
         skew = true;
         try {
@@ -490,12 +503,16 @@ public final class Expm {
             if (c != 0.0) {
                 norm = shiftedNorm;
             }
+            if (n > 2 && norm > maxNorm) {
+                return false;
+            }
             lastCost = n <= 2 ? -1 : cost(norm);
             lastShift = c;
             run(norm, outRe, outIm);
             if (c != 0.0) {
                 unshift(c, outRe, outIm);
             }
+            return true;
         } finally {
             skew = false;
             increment = false;

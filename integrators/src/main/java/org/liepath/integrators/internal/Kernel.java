@@ -260,21 +260,23 @@ public abstract class Kernel {
     }
 
     /**
-     * out = exp(scale·Ω) − I: Padé in increment form ({@link Expm#computeIncrement}) up to {@link #PADE_LIMIT};
-     * beyond it the increment is of order one anyway, so the eigen route's exponential minus I serves. For a
-     * Hamiltonian system Ω is anti-Hermitian and the same approximant is evaluated with half-cost products
-     * ({@link Expm#computeIncrementAntiHermitian}: its even powers and V are Hermitian, U anti-Hermitian). Outputs
+     * out = exp(scale·Ω) − I: Padé in increment form ({@link Expm#computeIncrement}). For a Hamiltonian system Ω
+     * is anti-Hermitian and the same approximant is evaluated with half-cost products
+     * ({@link Expm#computeIncrementAntiHermitian}: its even powers and V are Hermitian, U anti-Hermitian), up to
+     * {@link #PADE_LIMIT} on the 1-norm that selects the degree (after the workspace's Gershgorin-centre shift);
+     * beyond it the increment is of order one anyway, so the eigen route's exponential minus I serves. Outputs
      * must not alias inputs.
      */
     protected final void increment(double scale, double[] omR, double[] omI, double[] outR, double[] outI) {
-        // m ≤ 2: closed forms, exact and unitary at any norm, so the norm test is skipped
-        if (hexp == null || m <= 2 || Math.abs(scale) * Dense.norm1(m, omR, omI) <= PADE_LIMIT) {
+        if (hexp == null) {
             exponentials++;
-            if (hexp != null) {
-                expm.computeIncrementAntiHermitian(scale, omR, omI, outR, outI);
-            } else {
-                expm.computeIncrement(scale, omR, omI, outR, outI);
-            }
+            expm.computeIncrement(scale, omR, omI, outR, outI);
+            return;
+        }
+        // the workspace tests the norm it selects the degree by (after removing the Gershgorin centre, so a large
+        // energy offset alone does not force the eigen route); m ≤ 2 always proceeds (closed forms)
+        if (expm.computeIncrementAntiHermitian(scale, omR, omI, outR, outI, PADE_LIMIT)) {
+            exponentials++;
             return;
         }
         exponential(scale, omR, omI, outR, outI);
