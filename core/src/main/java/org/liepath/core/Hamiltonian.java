@@ -88,18 +88,52 @@ public final class Hamiltonian {
                     "length " + out.length);
         }
         for (int k = 0; k < drives.size(); k++) {
-            Drive d = drives.get(k);
-            double v;
-            try {
-                v = d.at(t);
-            } catch (RuntimeException e) {
-                throw new DriveException(d.name(), k, t, "threw " + e, e);
-            }
-            if (!Double.isFinite(v)) {
-                throw new DriveException(d.name(), k, t, "returned " + v, null);
-            }
-            out[k] = v;
+            out[k] = drive(k, t);
         }
+    }
+
+    /**
+     * Fills {@code out[j] = c_{terms[j]}(t)}: the coefficients of selected terms, with the checks of
+     * {@link #coefficients(double, double[])} (an integrator that has folded the constant terms evaluates only the
+     * driven ones this way).
+     *
+     * @param t     the time
+     * @param terms term indices, each in [0, {@link #size()})
+     * @param out   output array, at least as long as terms
+     * @throws InvalidInputException if t is not finite, an array is null or too short, or an index is out of range
+     * @throws DriveException        if a drive throws or returns a non-finite value (names the drive, term and time)
+     */
+    public void coefficients(double t, int[] terms, double[] out) {
+        Require.finite(t, "t");
+        Require.nonNull(terms, "terms");
+        Require.nonNull(out, "out");
+        if (out.length < terms.length) {
+            throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, "out", "length >= " + terms.length,
+                    "length " + out.length);
+        }
+        for (int j = 0; j < terms.length; j++) {
+            int k = terms[j];
+            if (k < 0 || k >= drives.size()) {
+                throw InvalidInputException.of(Reason.OUT_OF_RANGE, "terms", "indices in [0, " + drives.size() + ")",
+                        k);
+            }
+            out[j] = drive(k, t);
+        }
+    }
+
+    /** c_k(t), with a failure or a non-finite value reported as a {@link DriveException} naming term k. */
+    private double drive(int k, double t) {
+        Drive d = drives.get(k);
+        double v;
+        try {
+            v = d.at(t);
+        } catch (RuntimeException e) {
+            throw new DriveException(d.name(), k, t, "threw " + e, e);
+        }
+        if (!Double.isFinite(v)) {
+            throw new DriveException(d.name(), k, t, "returned " + v, null);
+        }
+        return v;
     }
 
     /**

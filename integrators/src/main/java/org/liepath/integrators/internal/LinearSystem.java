@@ -78,22 +78,74 @@ public final class LinearSystem {
         return idx;
     }
 
-    /** X' = −i H(t) X. */
+    /**
+     * X' = −i H(t) X. When two or more terms have a constant drive (piecewise constant without breakpoints), they
+     * are folded into G_0 = −i Σ c_k A_k, so the schemes combine, and the stored generator pairs pair, only the driven
+     * terms and G_0: a Hamiltonian written as many static terms plus a few drives costs per step what the drives
+     * plus one generator cost.
+     * A constant drive that throws or is not finite when evaluated here stays a driven term, so that the run reports
+     * it with its time.
+     */
     public static LinearSystem of(Hamiltonian h) {
-        int n = h.dim(), L = h.size();
-        double[][] gr = new double[L][], gi = new double[L][];
+        int n = h.dim(), L = h.size(), len = n * n;
+        java.util.List<org.liepath.core.Drive> drives = h.drives();
+        double[] value = new double[L];
+        int constants = 0;
         for (int k = 0; k < L; k++) {
+            value[k] = constantValue(drives.get(k));
+            constants += Double.isNaN(value[k]) ? 0 : 1;
+        }
+        if (constants < 2) {
+            // folding a single constant term would only rename it G_0 and add the subset evaluation's checks
+            java.util.Arrays.fill(value, Double.NaN);
+        }
+        int[] driven = new int[L];
+        int count = 0;
+        double[] g0r = null, g0i = null;
+        for (int k = 0; k < L; k++) {
+            double c = value[k];
+            if (Double.isNaN(c)) {
+                driven[count++] = k;
+                continue;
+            }
+            if (g0r == null) {
+                g0r = new double[len];
+                g0i = new double[len];
+            }
             Operator a = h.operators().get(k);
             double[] re = a.reArray(), im = a.imArray();
-            // −i (re + i im) = im − i re
-            gr[k] = im;
-            gi[k] = new double[n * n];
-            for (int q = 0; q < n * n; q++) {
-                gi[k][q] = -re[q];
+            // −i c (re + i im) = c im − i c re
+            for (int q = 0; q < len; q++) {
+                g0r[q] += c * im[q];
+                g0i[q] -= c * re[q];
             }
         }
-        return new LinearSystem(n, gr, gi, null, null, h::coefficients, h.breakpoints(), h.isPiecewiseConstant(),
-                true);
+        int[] idx = java.util.Arrays.copyOf(driven, count);
+        double[][] gr = new double[count][], gi = new double[count][];
+        for (int j = 0; j < count; j++) {
+            Operator a = h.operators().get(idx[j]);
+            double[] re = a.reArray(), im = a.imArray();
+            gr[j] = im;
+            gi[j] = new double[len];
+            for (int q = 0; q < len; q++) {
+                gi[j][q] = -re[q];
+            }
+        }
+        Coefficients source = count == L ? h::coefficients : (t, out) -> h.coefficients(t, idx, out);
+        return new LinearSystem(n, gr, gi, g0r, g0i, source, h.breakpoints(), h.isPiecewiseConstant(), true);
+    }
+
+    /** The value of a constant drive, or NaN if it is not constant (or fails, or is not finite, at t = 0). */
+    private static double constantValue(org.liepath.core.Drive d) {
+        if (!d.isPiecewiseConstant() || d.breakpoints().length > 0) {
+            return Double.NaN;
+        }
+        try {
+            double v = d.at(0.0);
+            return Double.isFinite(v) ? v : Double.NaN;
+        } catch (RuntimeException e) {
+            return Double.NaN;
+        }
     }
 
     /** v' = S(t) v in Liouville space (column stacking), S(t) = Σ c_k(t)(−i(I⊗A_k − A_kᵀ⊗I)) + dissipator. */
