@@ -57,6 +57,22 @@ public class HermitianExpBenchmark {
         pade = new Expm(n);
     }
 
+    /**
+     * A step exponent Ω = −i·s·H for a random Hermitian H (as {@link #randomHermitian}), scaled to ‖Ω‖₁ = norm1;
+     * exactly anti-Hermitian. Returns {re, im}.
+     */
+    static double[][] randomSkew(Random r, int n, double norm1) {
+        int len = n * n;
+        double[] hr = new double[len], hi = new double[len], wr = new double[len], wi = new double[len];
+        randomHermitian(r, n, hr, hi);
+        double s = norm1 / org.liepath.core.internal.Dense.norm1(n, hr, hi);
+        for (int k = 0; k < len; k++) {
+            wr[k] = s * hi[k];   // −i·s·H = s·(Im H) − i·s·(Re H)
+            wi[k] = -s * hr[k];
+        }
+        return new double[][]{wr, wi};
+    }
+
     static void randomHermitian(Random r, int n, double[] hr, double[] hi) {
         for (int i = 0; i < n; i++) {
             for (int j = 0; j <= i; j++) {

@@ -39,25 +39,10 @@ public class IncrementFactorBenchmark {
 
     @Setup
     public void setUp() {
-        Random r = new Random(3);
         int len = n * n;
-        double[] hr = new double[len], hi = new double[len];
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j <= i; j++) {
-                double a = r.nextGaussian(), b = i == j ? 0 : r.nextGaussian();
-                hr[i * n + j] = a;
-                hr[j * n + i] = a;
-                hi[i * n + j] = b;
-                hi[j * n + i] = -b;
-            }
-        }
-        double s = 0.01 / Dense.norm1(n, hr, hi);
-        wr = new double[len];
-        wi = new double[len];
-        for (int k = 0; k < len; k++) {
-            wr[k] = s * hi[k];   // −i·s·H = s·(Im H) − i·s·(Re H)
-            wi[k] = -s * hr[k];
-        }
+        double[][] w = HermitianExpBenchmark.randomSkew(new Random(3), n, 0.01);
+        wr = w[0];
+        wi = w[1];
         er = new double[len];
         ei = new double[len];
         yr = new double[len];

@@ -1,6 +1,5 @@
 package org.liepath.benchmarks;
 
-import org.liepath.core.internal.Dense;
 import org.liepath.core.internal.Expm;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -53,15 +52,9 @@ public class SkewIncrementBenchmark {
     @Setup
     public void setUp() {
         int len = n * n;
-        double[] hr = new double[len], hi = new double[len];
-        HermitianExpBenchmark.randomHermitian(new Random(5), n, hr, hi);
-        double s = norm / Dense.norm1(n, hr, hi);
-        wr = new double[len];
-        wi = new double[len];
-        for (int k = 0; k < len; k++) {
-            wr[k] = s * hi[k];   // −i·s·H = s·(Im H) − i·s·(Re H)
-            wi[k] = -s * hr[k];
-        }
+        double[][] w = HermitianExpBenchmark.randomSkew(new Random(5), n, norm);
+        wr = w[0];
+        wi = w[1];
         dr = new double[len];
         di = new double[len];
         ws = new Expm(n);
