@@ -352,9 +352,13 @@ class ExpmAntiHermitianTest {
                 double norm = Dense.norm1(n, a[0], a[1]);
                 Expm ws = new Expm(n);
                 double[][] got = incrementSkew(ws, a);
-                assertTrue(ws.lastCost() <= plainCost, "2j = " + twoJ + ", θ = " + theta + ", E = " + e
-                        + ": cost " + ws.lastCost() + " > " + plainCost + " of the offset-free exponent");
-                if (Expm.cost(norm) > plainCost) {
+                // for 3×3 below degree 13 the shift is taken only when it saves two degree steps (documented)
+                int offsetCost = Expm.cost(norm);
+                boolean worth = n != 3 || offsetCost >= 4 ? offsetCost > plainCost : offsetCost - plainCost >= 2;
+                int allowed = worth ? plainCost : offsetCost;
+                assertTrue(ws.lastCost() <= allowed, "2j = " + twoJ + ", θ = " + theta + ", E = " + e
+                        + ": cost " + ws.lastCost() + " > " + allowed);
+                if (worth) {
                     // the offset alone raised the cost: the shift must have removed it (the hull is symmetric
                     // about −E, as J_y has a zero diagonal)
                     assertEquals(-e, ws.lastShift(), 4 * U * Math.abs(e) * n, "shift");
