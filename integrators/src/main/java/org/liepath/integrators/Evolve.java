@@ -335,7 +335,13 @@ public final class Evolve {
             throw InvalidInputException.of(Reason.UNSUPPORTED, "steps", "an adaptive run for " + s.name()
                     + " (use tolerance(tol))", steps + " fixed steps");
         }
-        LinearSystem sys = h != null ? LinearSystem.of(h) : LinearSystem.of(l);
+        if (l != null) {
+            s.requireHamiltonian("l");
+        }
+        // exact stepping takes the whole generator, so an adaptive run of piecewise-constant drives stays in the
+        // Schrödinger picture whatever the scheme
+        boolean exact = adaptive && ham.isPiecewiseConstant();
+        LinearSystem sys = h != null ? (exact ? LinearSystem.of(h) : s.system(h)) : LinearSystem.of(l);
         int n = ham.dim(), m = sys.dim();
         Trajectory.Mode mode = h != null ? (psi != null ? Trajectory.Mode.STATE : Trajectory.Mode.PROPAGATOR)
                 : (rho0 != null ? Trajectory.Mode.DENSITY : Trajectory.Mode.CHANNEL);

@@ -25,7 +25,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * sum (E. Hairer, S. P. Nørsett, G. Wanner, Solving Ordinary Differential Equations I, Springer 1993, §II.3, "Lady
  * Windermere's fan" with Lipschitz factor 1): N·tol·‖U‖_F after N accepted steps. For the schemes of order ≥ 4 the
  * step counts are a few hundred, and we assert {@value #GLOBAL}; the second-order midpoint rule needs ~10⁴ steps at
- * this tolerance, so its budget is that sum (with a factor 2 for the estimate's own error).
+ * this tolerance, so its budget is that sum (with a factor 2 for the estimate's own error). So do the schemes in the
+ * interaction picture: where the static part is small against the drives (Landau–Zener: Δ/2 against a sweep up to
+ * 10) the frame makes the large driven part rotate, and Magnus 4 then needs ~6000 steps here (its error, 5.2e-9, stays
+ * below its own estimate, 3.5e-8).
  */
 class ExactSolutionsTest {
     static final double TOL = 1e-11;
@@ -40,7 +43,7 @@ class ExactSolutionsTest {
 
     /** The global-error budget of an adaptive run (see the class comment). */
     static double budget(SchemeCases.Case c, Evolution ev) {
-        if (c.order() >= 4) {
+        if (c.order() >= 4 && !c.get().isInteractionPicture()) {
             return GLOBAL;
         }
         // ‖U‖_F = √n in propagator mode, ‖ψ‖ = 1 in state mode

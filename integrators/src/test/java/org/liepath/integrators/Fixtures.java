@@ -16,17 +16,26 @@ final class Fixtures {
     private Fixtures() {
     }
 
-    /** Every scheme with a step kernel or the reference, in a fixed order. */
+    /** Every scheme with a step kernel or the reference, in a fixed order (interaction-picture variants last). */
     static List<Scheme> schemes() {
         return List.of(Scheme.exponentialMidpoint(), Scheme.magnus4(), Scheme.magnus6(), Scheme.magnus8(),
                 Scheme.commutatorFree4(), Scheme.commutatorFree4Opt(), Scheme.commutatorFree6(),
-                Scheme.piecewiseExact(), Scheme.reference());
+                Scheme.piecewiseExact(), Scheme.reference(), Scheme.exponentialMidpoint().inInteractionPicture(),
+                Scheme.magnus4().inInteractionPicture(), Scheme.magnus6().inInteractionPicture(),
+                Scheme.magnus8().inInteractionPicture());
     }
 
-    /** Schemes with a fixed-step kernel. */
+    /** Schemes with a fixed-step kernel (interaction-picture variants last). */
     static List<Scheme> steppable() {
         return List.of(Scheme.exponentialMidpoint(), Scheme.magnus4(), Scheme.magnus6(), Scheme.magnus8(),
-                Scheme.commutatorFree4(), Scheme.commutatorFree4Opt(), Scheme.commutatorFree6());
+                Scheme.commutatorFree4(), Scheme.commutatorFree4Opt(), Scheme.commutatorFree6(),
+                Scheme.exponentialMidpoint().inInteractionPicture(), Scheme.magnus4().inInteractionPicture(),
+                Scheme.magnus6().inInteractionPicture(), Scheme.magnus8().inInteractionPicture());
+    }
+
+    /** The schemes of {@link #steppable} that also serve GKLS generators (not the interaction-picture ones). */
+    static List<Scheme> steppableOpen() {
+        return steppable().stream().filter(s -> !s.isInteractionPicture()).collect(java.util.stream.Collectors.toList());
     }
 
     /** A random real symmetric n×n matrix (entries N(0, 1) symmetrised). */

@@ -46,8 +46,19 @@ final class SchemeCases {
     static final Case PIECEWISE = new Case("piecewiseExact", Scheme::piecewiseExact, 0, true, true);
     static final Case REFERENCE = new Case("reference", Scheme::reference, 8, false, false);
 
+    /** The single-exponential schemes in the interaction picture of the static part (same orders: the frame is exact). */
+    static final Case MIDPOINT_IP = new Case("exponentialMidpoint/interaction",
+            () -> Scheme.exponentialMidpoint().inInteractionPicture(), 2, true, false);
+    static final Case MAGNUS4_IP = new Case("magnus4/interaction", () -> Scheme.magnus4().inInteractionPicture(), 4,
+            true, false);
+    static final Case MAGNUS6_IP = new Case("magnus6/interaction", () -> Scheme.magnus6().inInteractionPicture(), 6,
+            true, false);
+    static final Case MAGNUS8_IP = new Case("magnus8/interaction", () -> Scheme.magnus8().inInteractionPicture(), 8,
+            true, false);
+
     /** The exponential (Lie-group) schemes for smooth drives. */
-    static final List<Case> LIE_GROUP = List.of(MIDPOINT, MAGNUS4, MAGNUS6, MAGNUS8, CF4, CF4OPT, CF6);
+    static final List<Case> LIE_GROUP = List.of(MIDPOINT, MAGNUS4, MAGNUS6, MAGNUS8, CF4, CF4OPT, CF6, MIDPOINT_IP,
+            MAGNUS4_IP, MAGNUS6_IP, MAGNUS8_IP);
 
     static Stream<Case> lieGroup() {
         return LIE_GROUP.stream();

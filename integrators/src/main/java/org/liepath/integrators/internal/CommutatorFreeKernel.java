@@ -13,6 +13,11 @@ public final class CommutatorFreeKernel extends Kernel {
 
     public CommutatorFreeKernel(LinearSystem sys, double[] nodes, double[][] table, int order) {
         super(sys, nodes.length);
+        if (interaction() && table.length > 1) {
+            // the frame's half-step phases enclose one exponential (InteractionFrame)
+            throw new IllegalArgumentException("table: one exponential in the interaction picture, got "
+                    + table.length);
+        }
         this.nodes = nodes;
         this.table = table;
         this.order = order;

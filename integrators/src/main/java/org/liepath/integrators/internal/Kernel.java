@@ -35,6 +35,12 @@ public abstract class Kernel {
     protected final double[][] coef;
     /** Combined weights per term. */
     protected final double[] w;
+    /** The per-step interaction picture for a system from {@link LinearSystem#interaction}, else null. */
+    final InteractionFrame frame;
+    /** Scratch for the frame's basis change (m×m), null without a frame. */
+    private final double[] fr1, fi1;
+    /** The frame's origin t_r and the midpoint of the step being taken. */
+    private double frameOrigin, frameMid;
 
     public long evaluations;
     public long exponentials;
@@ -66,6 +72,10 @@ public abstract class Kernel {
         yi2 = new double[len];
         coef = new double[Math.max(nodes, 1)][sys.terms];
         w = new double[sys.terms];
+        frame = sys.isInteractionPicture() ? new InteractionFrame(sys, nodes) : null;
+        boolean change = frame != null;
+        fr1 = change ? new double[len] : null;
+        fi1 = change ? new double[len] : null;
     }
 
     /** @return the classical order of the propagated result */
@@ -186,16 +196,35 @@ public abstract class Kernel {
         return lo;
     }
 
-    /** Evaluates the coefficients at t + c[k] h into coef[k]. */
+    /**
+     * Evaluates the coefficients at t + c[k] h into coef[k]; in the interaction picture also the node matrices of
+     * the step's frame.
+     */
     protected final void evaluate(double t, double h, double[] c) {
         for (int k = 0; k < c.length; k++) {
             sys.coefficients(t + c[k] * h, coef[k]);
         }
         evaluations += c.length;
+        if (frame != null) {
+            frameMid = t + 0.5 * h;
+            frame.phases(h, c);
+            if (!frame.table) {
+                frame.nodes(coef, c.length);
+            }
+        }
+    }
+
+    /** @return whether this kernel steps in the interaction picture of a static part */
+    protected final boolean interaction() {
+        return frame != null;
     }
 
     /** (wr, wi) = Σ_k alpha[k] coef[k] combined with scale s: Σ_k s·alpha_k A(t_k). */
     protected final void combineNodes(double s, double[] alpha, double[] outR, double[] outI) {
+        if (frame != null) {
+            frame.combination(s, alpha, coef, outR, outI);
+            return;
+        }
         sys.combine(w, nodeWeights(s, alpha, w), outR, outI);
     }
 
@@ -242,11 +271,61 @@ public abstract class Kernel {
      * repeats coherently from step to step and long runs drift like a random walk of the state's own rounding.
      */
     protected final void expApply(double[] omR, double[] omI, int p, double[] xr, double[] xi) {
+        if (frame != null) {
+            // the exponent was formed about the step's midpoint: carry it to the frame of the origin
+            frame.conjugate(frameMid - frameOrigin, omR, omI);
+        }
         if (p == 1 && krylov != null && krylovApply(omR, omI, xr, xi)) {
             return;
         }
         increment(1.0, omR, omI, er, ei);
         addLeft(p, er, ei, xr, xi);
+    }
+
+    /**
+     * @return whether this kernel's states live in an interaction frame (see {@link InteractionFrame}): callers
+     *     bring states in with {@link #toFrame} and out with {@link #fromFrame}
+     */
+    public final boolean inFrame() {
+        return frame != null;
+    }
+
+    /**
+     * X ← V† X (m×p, in place): a state at time origin into the interaction frame of origin t_r = origin, for the
+     * steps that follow (no-op without a frame).
+     */
+    public final void toFrame(double origin, int p, double[] xr, double[] xi) {
+        if (frame == null) {
+            return;
+        }
+        frameOrigin = origin;
+        if (frame.diagonal()) {
+            return;
+        }
+        int len = m * p;
+        mulLeft(p, frame.vhr, frame.vhi, xr, xi, fr1, fi1);
+        System.arraycopy(fr1, 0, xr, 0, len);
+        System.arraycopy(fi1, 0, xi, 0, len);
+    }
+
+    /**
+     * out = V e^{−iD(t−t_r)} X: the state of time t back in the Hamiltonian's basis (a copy without a frame).
+     * Outputs must not alias inputs.
+     */
+    public final void fromFrame(double t, int p, double[] xr, double[] xi, double[] outR, double[] outI) {
+        int len = m * p;
+        if (frame == null || frame.diagonal()) {
+            System.arraycopy(xr, 0, outR, 0, len);
+            System.arraycopy(xi, 0, outI, 0, len);
+            if (frame != null) {
+                frame.phaseRows(t - frameOrigin, p, outR, outI);
+            }
+            return;
+        }
+        System.arraycopy(xr, 0, fr1, 0, len);
+        System.arraycopy(xi, 0, fi1, 0, len);
+        frame.phaseRows(t - frameOrigin, p, fr1, fi1);
+        mulLeft(p, frame.vr, frame.vi, fr1, fi1, outR, outI);
     }
 
     /** X ← X + D X for D m×m (planar) and X m×p, using (sr, si) as scratch. */

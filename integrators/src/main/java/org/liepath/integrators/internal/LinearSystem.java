@@ -29,9 +29,39 @@ public final class LinearSystem {
     final double[] breakpoints;
     final boolean piecewiseConstant;
     final boolean skewHermitian;
+    /**
+     * The interaction-picture frame (see {@link #interaction}): energies of the static part in the basis the
+     * generators are written in, or null for the Schrödinger picture.
+     */
+    final double[] frameEnergies;
+    /** Eigenvectors V of the static part (columns) and V†, planar; null when the static part is diagonal. */
+    final double[] frameVr, frameVi, frameVhr, frameVhi;
 
     private LinearSystem(int m, double[][] gr, double[][] gi, double[] g0r, double[] g0i, Coefficients source,
                          double[] breakpoints, boolean piecewiseConstant, boolean skewHermitian) {
+        this(m, gr, gi, g0r, g0i, source, breakpoints, piecewiseConstant, skewHermitian, null, null, null);
+    }
+
+    private LinearSystem(int m, double[][] gr, double[][] gi, double[] g0r, double[] g0i, Coefficients source,
+                         double[] breakpoints, boolean piecewiseConstant, boolean skewHermitian,
+                         double[] frameEnergies, double[] frameVr, double[] frameVi) {
+        this.frameEnergies = frameEnergies;
+        this.frameVr = frameVr;
+        this.frameVi = frameVi;
+        if (frameVr != null) {
+            int len = m * m;
+            frameVhr = new double[len];
+            frameVhi = new double[len];
+            for (int i = 0; i < m; i++) {
+                for (int j = 0; j < m; j++) {
+                    frameVhr[i * m + j] = frameVr[j * m + i];
+                    frameVhi[i * m + j] = -frameVi[j * m + i];
+                }
+            }
+        } else {
+            frameVhr = null;
+            frameVhi = null;
+        }
         this.m = m;
         this.terms = gr.length;
         this.gr = gr;
@@ -133,6 +163,107 @@ public final class LinearSystem {
         }
         Coefficients source = count == L ? h::coefficients : (t, out) -> h.coefficients(t, idx, out);
         return new LinearSystem(n, gr, gi, g0r, g0i, source, h.breakpoints(), h.isPiecewiseConstant(), true);
+    }
+
+    /**
+     * X' = −i H(t) X in the interaction picture of the static part H_0 = Σ c_k A_k over the terms with a constant
+     * drive (as in {@link #of(Hamiltonian)}, a constant drive that fails or is not finite stays driven). With
+     * H_0 = V diag(d) V† (V = I when H_0 is diagonal, else from the Hermitian eigendecomposition) the generators of
+     * the returned system are those of the driven terms in the eigenbasis, G_k = −i V† A_k V, with no G_0; the
+     * kernels put the phases e^{±i d s} of the frame around them ({@link Kernel}). Without a constant term the
+     * Schrödinger-picture system is returned (the frame would be the identity).
+     */
+    public static LinearSystem interaction(Hamiltonian h) {
+        int n = h.dim(), L = h.size(), len = n * n;
+        java.util.List<org.liepath.core.Drive> drives = h.drives();
+        double[] h0r = new double[len], h0i = new double[len];
+        int[] driven = new int[L];
+        int count = 0;
+        boolean anyStatic = false;
+        for (int k = 0; k < L; k++) {
+            double c = constantValue(drives.get(k));
+            if (Double.isNaN(c)) {
+                driven[count++] = k;
+                continue;
+            }
+            anyStatic = true;
+            Operator a = h.operators().get(k);
+            double[] re = a.reArray(), im = a.imArray();
+            for (int q = 0; q < len; q++) {
+                h0r[q] += c * re[q];
+                h0i[q] += c * im[q];
+            }
+        }
+        if (!anyStatic) {
+            return of(h);
+        }
+        boolean diagonal = true;
+        for (int i = 0; i < n && diagonal; i++) {
+            for (int j = 0; j < n; j++) {
+                if (i != j && (h0r[i * n + j] != 0.0 || h0i[i * n + j] != 0.0)) {
+                    diagonal = false;
+                    break;
+                }
+            }
+        }
+        double[] d = new double[n], vr = null, vi = null;
+        if (diagonal) {
+            for (int i = 0; i < n; i++) {
+                d[i] = h0r[i * n + i];
+            }
+        } else {
+            vr = new double[len];
+            vi = new double[len];
+            if (!new org.liepath.core.internal.HermitianEigen(n).compute(h0r, h0i, d, vr, vi)) {
+                throw new ArithmeticException("the eigendecomposition of the static part did not converge");
+            }
+        }
+        int[] idx = java.util.Arrays.copyOf(driven, count);
+        double[][] gr = new double[count][], gi = new double[count][];
+        double[] tr = new double[len], ti = new double[len], ur = new double[len], ui = new double[len];
+        for (int j = 0; j < count; j++) {
+            Operator a = h.operators().get(idx[j]);
+            double[] re = a.reArray(), im = a.imArray();
+            if (!diagonal) {
+                // A' = V† A V
+                org.liepath.core.internal.Dense.mul(n, re, im, vr, vi, tr, ti);
+                conjugateTransposeTimes(n, vr, vi, tr, ti, ur, ui);
+                re = ur;
+                im = ui;
+            }
+            // −i (re + i im) = im − i re
+            gr[j] = im.clone();
+            gi[j] = new double[len];
+            for (int q = 0; q < len; q++) {
+                gi[j][q] = -re[q];
+            }
+        }
+        Coefficients source = (t, out) -> h.coefficients(t, idx, out);
+        return new LinearSystem(n, gr, gi, null, null, source, h.breakpoints(), h.isPiecewiseConstant(), true, d, vr,
+                vi);
+    }
+
+    /** out = V† X for n×n planar matrices. */
+    private static void conjugateTransposeTimes(int n, double[] vr, double[] vi, double[] xr, double[] xi,
+                                                double[] outR, double[] outI) {
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                double sr = 0, si = 0;
+                for (int k = 0; k < n; k++) {
+                    // conj(V_ki) X_kj
+                    double a = vr[k * n + i], b = -vi[k * n + i], c = xr[k * n + j], e = xi[k * n + j];
+                    sr += a * c - b * e;
+                    si += a * e + b * c;
+                }
+                outR[i * n + j] = sr;
+                outI[i * n + j] = si;
+            }
+        }
+    }
+
+    /** @return whether this system is written in the interaction picture of a static part (see {@link #interaction}) */
+    public boolean isInteractionPicture() {
+        return frameEnergies != null;
     }
 
     /** The value of a constant drive, or NaN if it is not constant (or fails, or is not finite, at t = 0). */

@@ -34,6 +34,9 @@ public final class MagnusKernel extends Kernel {
     private final double[] x, y;
     /** Selected weights and destinations of one {@link LinearSystem#combineAll} call. */
     private final double[][] selW = new double[4][], selR = new double[4][], selI = new double[4][];
+    /** The same selections as node rows s·alpha (the interaction picture combines node matrices instead). */
+    private final double[][] selAlpha = new double[4][];
+    private final double[] selScale = new double[4];
     /** Addends and destinations of the commutators of one {@link GeneratorPairs#combine} call. */
     private final double[][] addR = new double[3][], addI = new double[3][], pairR = new double[3][],
             pairI = new double[3][];
@@ -52,7 +55,8 @@ public final class MagnusKernel extends Kernel {
         this.nodes = order == 4 ? Tables.GAUSS2 : order == 6 ? Tables.GAUSS3 : Tables.GAUSS4;
         int count = order == 4 ? 6 : order == 6 ? 14 : 26;
         m6 = new double[count][m * m];
-        pairs = usePairs ? new GeneratorPairs(sys, (ar, ai, br, bi, cr, ci) -> bracket(1.0, ar, ai, br, bi, cr, ci))
+        // stored generator pairs need fixed generators; in the interaction picture they rotate with the frame
+        pairs = usePairs && !sys.isInteractionPicture() ? new GeneratorPairs(sys, (ar, ai, br, bi, cr, ci) -> bracket(1.0, ar, ai, br, bi, cr, ci))
                 : null;
         int n = sys.generators();
         beta = new double[4][n];
@@ -89,6 +93,9 @@ public final class MagnusKernel extends Kernel {
 
     /** beta[j] = generator weights of Σ_k s·alpha_k A(t_k), G_0's last (as {@link #combineNodes} would pass on). */
     private void weights(int j, double s, double[] alpha) {
+        if (interaction()) {
+            return;
+        }
         double[] b = beta[j];
         double w0 = nodeWeights(s, alpha, b);
         if (b.length > sys.terms) {
@@ -103,15 +110,24 @@ public final class MagnusKernel extends Kernel {
         }
     }
 
-    /** Selects weights w for destination j of the next {@link #build}. */
-    private void use(int j, double[] w, double[] re, double[] im) {
+    /**
+     * Selects destination j of the next {@link #build}: Σ_k s·alpha_k A(t_k), whose generator weights are w (from
+     * {@link #weights} or {@link #eighthWeights}).
+     */
+    private void use(int j, double s, double[] alpha, double[] w, double[] re, double[] im) {
         selW[j] = w;
+        selScale[j] = s;
+        selAlpha[j] = alpha;
         selR[j] = re;
         selI[j] = im;
     }
 
-    /** Builds the matrices of the selected weights 0..count−1 in one call. */
+    /** Builds the matrices of the selections 0..count−1 (in one pass over the generators, or from node matrices). */
     private void build(int count) {
+        if (interaction()) {
+            frame.combinations(count, selScale, selAlpha, coef, selR, selI);
+            return;
+        }
         sys.combineAll(count, selW, selR, selI);
     }
 
@@ -148,6 +164,7 @@ public final class MagnusKernel extends Kernel {
     }
 
     private static final double[][] UNIT2 = {{1, 0}, {0, 1}};
+    private static final double[] HALF2 = {1, 1};
     private static final double SQRT3_12 = Math.sqrt(3) / 12;
 
     private void fourth(double h) {
@@ -158,7 +175,7 @@ public final class MagnusKernel extends Kernel {
             // Ω lies in the span of generators and their pairs: no m×m product at all
             double[] a1 = beta[0], a2 = beta[1];
             mix(0.5 * h, a1, 0.5 * h, a2, x);
-            use(0, x, wr, wi);
+            use(0, 0.5 * h, HALF2, x, wr, wi);
             build(1);
             pair(0, c, a1, a2, wr, wi, wr, wi);
             pairCommutators(1, 1);
@@ -166,8 +183,8 @@ public final class MagnusKernel extends Kernel {
         }
         double[][] s = m6;
         double[] a1r = s[0], a1i = s[1], a2r = s[2], a2i = s[3], cr = s[4], ci = s[5];
-        use(0, beta[0], a1r, a1i);
-        use(1, beta[1], a2r, a2i);
+        use(0, 1.0, UNIT2[0], beta[0], a1r, a1i);
+        use(1, 1.0, UNIT2[1], beta[1], a2r, a2i);
         build(2);
         commutator(c, a1r, a1i, a2r, a2i, cr, ci);
         lin(0.5 * h, a1r, a1i, 0.5 * h, a2r, a2i, 1.0, cr, ci, wr, wi);
@@ -183,9 +200,9 @@ public final class MagnusKernel extends Kernel {
         weights(0, h, ALPHA1);
         weights(1, h * SQRT15_3, ALPHA2);
         weights(2, h * 10.0 / 3, ALPHA3);
-        use(0, beta[0], a1r, a1i);
-        use(1, beta[1], a2r, a2i);
-        use(2, beta[2], a3r, a3i);
+        use(0, h, ALPHA1, beta[0], a1r, a1i);
+        use(1, h * SQRT15_3, ALPHA2, beta[1], a2r, a2i);
+        use(2, h * 10.0 / 3, ALPHA3, beta[2], a3r, a3i);
         build(3);
         if (pairs != null) {
             pair(0, 1.0, beta[0], beta[1], null, null, c1r, c1i);           // C1 = [α1, α2]
@@ -216,6 +233,9 @@ public final class MagnusKernel extends Kernel {
     private static final double E0 = W1 / 2, E1 = W2 / 2, O0 = V1 * W1 / 2, O1 = V2 * W2 / 2;
     private static final double E2 = V1 * V1 * W1 / 2, E3 = V2 * V2 * W2 / 2;
     private static final double O2 = V1 * V1 * V1 * W1 / 2, O3 = V2 * V2 * V2 * W2 / 2;
+    /** The same rows as node weights, for the node matrices of the interaction picture. */
+    private static final double[] ROW_B0 = {E0, E1, E1, E0}, ROW_B1 = {-O0, -O1, O1, O0},
+            ROW_B2 = {E2, E3, E3, E2}, ROW_B3 = {-O2, -O3, O3, O2};
 
     /**
      * The weights of B0…B3 from the node symmetry: the rows of B0 and B2 are even in the node order, those of B1 and
@@ -223,6 +243,9 @@ public final class MagnusKernel extends Kernel {
      * G_0's weights are the row sums: exactly zero for the odd rows.
      */
     private void eighthWeights() {
+        if (interaction()) {
+            return;
+        }
         double[] c0 = coef[0], c1 = coef[1], c2 = coef[2], c3 = coef[3];
         double[] b0 = beta[0], b1 = beta[1], b2 = beta[2], b3 = beta[3];
         int terms = sys.terms;
@@ -250,9 +273,9 @@ public final class MagnusKernel extends Kernel {
         eighthWeights();
         if (pairs != null) {
             // B1 enters only through Q2, a first-level commutator: its matrix is never needed
-            use(0, beta[0], b0r, b0i);
-            use(1, beta[2], b2r, b2i);
-            use(2, beta[3], b3r, b3i);
+            use(0, 1.0, ROW_B0, beta[0], b0r, b0i);
+            use(1, 1.0, ROW_B2, beta[2], b2r, b2i);
+            use(2, 1.0, ROW_B3, beta[3], b3r, b3i);
             build(3);
             double[] w0 = beta[0], w1 = beta[1], w2 = beta[2], w3 = beta[3];
             // Q1, Q2 and the [B0, B2] part of Q3's inner commutator in one pass over the pairs: the last is not one of
@@ -269,10 +292,10 @@ public final class MagnusKernel extends Kernel {
             commutator(b0r, b0i, xr, xi, yr, yi);
             lin(1.0, yr, yi, 1.0, ur, ui, yr, yi);
         } else {
-            use(0, beta[0], b0r, b0i);
-            use(1, beta[1], b1r, b1i);
-            use(2, beta[2], b2r, b2i);
-            use(3, beta[3], b3r, b3i);
+            use(0, 1.0, ROW_B0, beta[0], b0r, b0i);
+            use(1, 1.0, ROW_B1, beta[1], b1r, b1i);
+            use(2, 1.0, ROW_B2, beta[2], b2r, b2i);
+            use(3, 1.0, ROW_B3, beta[3], b3r, b3i);
             build(4);
             lin(-38.0 / 5, b0r, b0i, 24.0, b2r, b2i, xr, xi);
             commutator(xr, xi, b3r, b3i, q1r, q1i);

@@ -19,6 +19,10 @@ public final class PiecewiseKernel extends Kernel {
 
     public PiecewiseKernel(LinearSystem sys) {
         super(sys, 1);
+        if (sys.isInteractionPicture()) {
+            // P exp(hA_1) P is not exp(h(A_0 + A_1)): exact stepping needs the whole generator
+            throw new IllegalArgumentException("sys: a system in the Schrödinger picture for exact stepping");
+        }
     }
 
     @Override

@@ -36,21 +36,52 @@ public final class Runner {
         long start = System.nanoTime();
         int m = kernel.m, p = spec.p, len = m * p;
         double[] xr = Arrays.copyOf(spec.x0r, len), xi = Arrays.copyOf(spec.x0i, len);
-        res.record(spec.t0, xr, xi, len);
+        // an interaction-picture kernel steps the state of its frame, entered once here and left at each sample
+        kernel.toFrame(spec.t0, p, xr, xi);
+        stateTime = spec.t0;
+        if (kernel.inFrame()) {
+            outR = new double[len];
+            outI = new double[len];
+        }
+        record(spec.t0, xr, xi);
         res.timeReached = spec.t0;
         if (spec.adaptive) {
             adaptive(xr, xi);
         } else {
             fixed(xr, xi);
         }
-        res.xr = xr;
-        res.xi = xi;
-        res.record(res.timeReached, xr, xi, len);
+        if (kernel.inFrame()) {
+            // left at the end of the last step as computed (tk + dt), as the zero-allocation stepper does
+            kernel.fromFrame(stateTime, p, xr, xi, outR, outI);
+            res.xr = outR.clone();
+            res.xi = outI.clone();
+            res.record(res.timeReached, outR, outI, len);
+        } else {
+            res.xr = xr;
+            res.xi = xi;
+            res.record(res.timeReached, xr, xi, len);
+        }
         res.evaluations = kernel.evaluations;
         res.exponentials = kernel.exponentials;
         res.commutators = kernel.commutators;
         res.nanos = System.nanoTime() - start;
         return res;
+    }
+
+    /** Scratch for states brought back from the kernel's frame, or null. */
+    private double[] outR, outI;
+    /** The time of the state as its last step computed it (the frame's exit time). */
+    private double stateTime;
+
+    /** Records a sample of the state at time t (in the Hamiltonian's basis). */
+    private void record(double t, double[] xr, double[] xi) {
+        int len = kernel.m * spec.p;
+        if (outR == null) {
+            res.record(t, xr, xi, len);
+            return;
+        }
+        kernel.fromFrame(t, spec.p, xr, xi, outR, outI);
+        res.record(t, outR, outI, len);
     }
 
     /** Minimum step length: far below any useful step, far above the spacing of doubles near t. */
@@ -112,23 +143,27 @@ public final class Runner {
                 while (next < stops.length - 1 && (stops[next] - cur) * dt > 0 && (tEnd - stops[next]) * dt > 0) {
                     kernel.advance(cur, stops[next] - cur, p, xr, xi);
                     cur = stops[next];
-                    res.record(cur, xr, xi, len);
+                    record(cur, xr, xi);
                     next++;
                 }
                 if (cur == tk) {
                     kernel.advance(tk, dt, p, xr, xi);
+                    stateTime = tk + dt;
                 } else {
                     kernel.advance(cur, tk + dt - cur, p, xr, xi);
+                    stateTime = cur + (tk + dt - cur);
                 }
             } catch (DriveException e) {
                 System.arraycopy(br, 0, xr, 0, len);
                 System.arraycopy(bi, 0, xi, 0, len);
+                stateTime = tk;
                 fail(Run.Outcome.DRIVE_FAILED, e.getMessage());
                 return;
             }
             if (!Double.isFinite(Kernel.norm(len, xr, xi))) {
                 System.arraycopy(br, 0, xr, 0, len);
                 System.arraycopy(bi, 0, xi, 0, len);
+                stateTime = tk;
                 fail(Run.Outcome.NON_FINITE, "the state became non-finite in the step from t = " + tk
                         + " of length " + dt);
                 return;
@@ -137,10 +172,10 @@ public final class Runner {
             res.timeReached = k == n - 1 ? t1 : tk + dt;
             if (next < stops.length - 1 && stops[next] == tEnd) {
                 next++;
-                res.record(res.timeReached, xr, xi, len);
+                record(res.timeReached, xr, xi);
             }
             if (spec.everyStep) {
-                res.record(res.timeReached, xr, xi, len);
+                record(res.timeReached, xr, xi);
             }
             observe(res.timeReached, dt, Double.NaN);
             if (!report(k == n - 1 ? 1.0 : Math.abs((res.timeReached - t0) / (t1 - t0)), k + 1, k == n - 1)) {
@@ -199,16 +234,17 @@ public final class Runner {
                 res.accepted++;
                 errSum += err;
                 res.timeReached = tNew;
+                stateTime = tNew;
                 double prev = t;
                 t = tNew;
                 if (lands) {
                     next++;
                     if (isSample(t)) {
-                        res.record(t, xr, xi, len);
+                        record(t, xr, xi);
                     }
                 }
                 if (spec.everyStep) {
-                    res.record(t, xr, xi, len);
+                    record(t, xr, xi);
                 }
                 observe(t, t - prev, err);
                 boolean done = next == stops.length;
