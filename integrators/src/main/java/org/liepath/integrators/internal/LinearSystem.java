@@ -228,6 +228,18 @@ public final class LinearSystem {
                 // A' = V† A V
                 org.liepath.core.internal.Dense.mul(n, re, im, vr, vi, tr, ti);
                 conjugateTransposeTimes(n, vr, vi, tr, ti, ur, ui);
+                // Hermitian only to rounding: take the Hermitian part, so that every exponent the schemes form is
+                // anti-Hermitian bit for bit, as in the Schrödinger picture
+                for (int i = 0; i < n; i++) {
+                    ui[i * n + i] = 0.0;
+                    for (int l = i + 1; l < n; l++) {
+                        double xr = 0.5 * (ur[i * n + l] + ur[l * n + i]), xi = 0.5 * (ui[i * n + l] - ui[l * n + i]);
+                        ur[i * n + l] = xr;
+                        ui[i * n + l] = xi;
+                        ur[l * n + i] = xr;
+                        ui[l * n + i] = -xi;
+                    }
+                }
                 re = ur;
                 im = ui;
             }
