@@ -40,6 +40,9 @@ public final class WorkPrecision {
         SCHEMES.put("commutatorFree4", Scheme::commutatorFree4);
         SCHEMES.put("commutatorFree4Opt", Scheme::commutatorFree4Opt);
         SCHEMES.put("commutatorFree6", Scheme::commutatorFree6);
+        SCHEMES.put("magnus4Interaction", () -> Scheme.magnus4().inInteractionPicture());
+        SCHEMES.put("magnus6Interaction", () -> Scheme.magnus6().inInteractionPicture());
+        SCHEMES.put("magnus8Interaction", () -> Scheme.magnus8().inInteractionPicture());
     }
 
     /** One measured run. */

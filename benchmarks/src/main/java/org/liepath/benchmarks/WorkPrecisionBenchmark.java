@@ -44,13 +44,17 @@ public class WorkPrecisionBenchmark {
 
     static {
         // from a WorkPrecision run on 2026-12-01 (errors ∝ n^-p interpolated to 1e-10); the midpoint rule would need
-        // ~10^5 steps on (b) and (c) and is left out there
+        // ~10^5 steps on (b) and (c) and is left out there; the interaction-picture counts from a run on 2026-12-02
+        // (errors 0.9e-10…1.0e-10 at these counts)
         tune("THREE_LEVEL", 1.6e-11, "exponentialMidpoint", 120000, "magnus4", 576, "magnus6", 92, "magnus8", 37,
-                "commutatorFree4", 368, "commutatorFree4Opt", 160, "commutatorFree6", 56);
+                "commutatorFree4", 368, "commutatorFree4Opt", 160, "commutatorFree6", 56,
+                "magnus4Interaction", 480, "magnus6Interaction", 70, "magnus8Interaction", 29);
         tune("SIXTEEN_LEVEL", 5e-13, "magnus4", 720, "magnus6", 196, "magnus8", 104,
-                "commutatorFree4", 520, "commutatorFree4Opt", 176, "commutatorFree6", 88);
+                "commutatorFree4", 520, "commutatorFree4Opt", 176, "commutatorFree6", 88,
+                "magnus4Interaction", 850, "magnus6Interaction", 176, "magnus8Interaction", 78);
         tune("SIXTY_FOUR_LEVEL", 2.2e-11, "magnus4", 248, "magnus6", 54, "magnus8", 27,
-                "commutatorFree4", 176, "commutatorFree4Opt", 68, "commutatorFree6", 26);
+                "commutatorFree4", 176, "commutatorFree4Opt", 68, "commutatorFree6", 26,
+                "magnus4Interaction", 300, "magnus6Interaction", 47, "magnus8Interaction", 22);
     }
 
     static void tune(String problem, double commonsTol, Object... schemeSteps) {
@@ -67,7 +71,7 @@ public class WorkPrecisionBenchmark {
 
     /** A Liepath scheme name, or "CommonsDP853" for the comparator. */
     @Param({"exponentialMidpoint", "magnus4", "magnus6", "magnus8", "commutatorFree4", "commutatorFree4Opt",
-            "commutatorFree6", "CommonsDP853"})
+            "commutatorFree6", "magnus4Interaction", "magnus6Interaction", "magnus8Interaction", "CommonsDP853"})
     public String method;
 
     BenchProblems p;

@@ -27,7 +27,7 @@ public final class WorkPrecisionRatio {
     private WorkPrecisionRatio() {
     }
 
-    static final String[] CANDIDATES = {"magnus6", "magnus8", "commutatorFree6"};
+    static final String[] CANDIDATES = {"magnus6", "magnus8", "magnus6Interaction", "magnus8Interaction"};
 
     /** Best-of thread CPU time of a task in seconds: at least three runs and at least ~0.1 s. */
     static double best(Supplier<Operator> task) {

@@ -217,6 +217,7 @@ public final class LinearSystem {
             if (!new org.liepath.core.internal.HermitianEigen(n).compute(h0r, h0i, d, vr, vi)) {
                 throw new ArithmeticException("the eigendecomposition of the static part did not converge");
             }
+            orthonormalizeColumns(n, vr, vi);
         }
         int[] idx = java.util.Arrays.copyOf(driven, count);
         double[][] gr = new double[count][], gi = new double[count][];
@@ -253,6 +254,43 @@ public final class LinearSystem {
         Coefficients source = (t, out) -> h.coefficients(t, idx, out);
         return new LinearSystem(n, gr, gi, null, null, source, h.breakpoints(), h.isPiecewiseConstant(), true, d, vr,
                 vi);
+    }
+
+    /**
+     * Gram–Schmidt on the columns of V, twice ("twice is enough": L. Giraud, J. Langou, M. Rozložník, Comput. Math.
+     * Appl. 50 (2005) 1069–1075): the eigenvectors come unitary to a few ulps times n, and the frame's basis change
+     * enters a run once and leaves it once, so its defect lands on the result whole (measured at n = 64: 3.9e-14
+     * before, against the 1e-14 the Schrödinger-picture schemes keep). The columns move by that defect only, far
+     * below the eigendecomposition's own residual.
+     */
+    private static void orthonormalizeColumns(int n, double[] vr, double[] vi) {
+        for (int pass = 0; pass < 2; pass++) {
+            for (int j = 0; j < n; j++) {
+                for (int k = 0; k < j; k++) {
+                    double cr = 0, ci = 0;
+                    for (int i = 0; i < n; i++) {
+                        // conj(v_k) · v_j
+                        double ar = vr[i * n + k], ai = vi[i * n + k], br = vr[i * n + j], bi = vi[i * n + j];
+                        cr += ar * br + ai * bi;
+                        ci += ar * bi - ai * br;
+                    }
+                    for (int i = 0; i < n; i++) {
+                        double ar = vr[i * n + k], ai = vi[i * n + k];
+                        vr[i * n + j] -= cr * ar - ci * ai;
+                        vi[i * n + j] -= cr * ai + ci * ar;
+                    }
+                }
+                double norm = 0;
+                for (int i = 0; i < n; i++) {
+                    norm += vr[i * n + j] * vr[i * n + j] + vi[i * n + j] * vi[i * n + j];
+                }
+                double inv = 1.0 / Math.sqrt(norm);
+                for (int i = 0; i < n; i++) {
+                    vr[i * n + j] *= inv;
+                    vi[i * n + j] *= inv;
+                }
+            }
+        }
     }
 
     /** out = V† X for n×n planar matrices. */
