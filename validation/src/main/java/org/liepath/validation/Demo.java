@@ -214,7 +214,8 @@ public final class Demo {
         CrossCheck.Builder ccb = CrossCheck.of(h).over(0, T).reference(reference)
                 .scheme(Scheme.exponentialMidpoint(), 400).scheme(Scheme.magnus4(), 50)
                 .scheme(Scheme.commutatorFree4(), 50).scheme(Scheme.commutatorFree4Opt(), 50)
-                .scheme(Scheme.magnus6(), 25).scheme(Scheme.commutatorFree6(), 25).scheme(Scheme.magnus8(), 16)
+                .scheme(Scheme.magnus6(), 25).scheme(Scheme.magnus6().inInteractionPicture(), 25)
+                .scheme(Scheme.commutatorFree6(), 25).scheme(Scheme.magnus8(), 16)
                 .scheme(Scheme.commutatorFree4Opt()).tolerance(1e-10)
                 .monitor(progress(log, "schemes"));
         if (chart != null) {
