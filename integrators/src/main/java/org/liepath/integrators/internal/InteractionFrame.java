@@ -248,9 +248,17 @@ final class InteractionFrame {
         double[] o1r = count > 1 ? outR[1] : spareR, o1i = count > 1 ? outI[1] : spareI;
         double[] o2r = count > 2 ? outR[2] : spareR, o2i = count > 2 ? outI[2] : spareI;
         double[] o3r = count > 3 ? outR[3] : spareR, o3i = count > 3 ? outI[3] : spareI;
-        for (int i = 0; i < count; i++) {
-            java.util.Arrays.fill(outR[i], 0, len, 0.0);
-            java.util.Arrays.fill(outI[i], 0, len, 0.0);
+        // one clearing pass for all outputs (the spare ones included): for small m a call to Arrays.fill per array
+        // costs more than the stores
+        for (int q = 0; q < len; q++) {
+            o0r[q] = 0.0;
+            o0i[q] = 0.0;
+            o1r[q] = 0.0;
+            o1i[q] = 0.0;
+            o2r[q] = 0.0;
+            o2i[q] = 0.0;
+            o3r[q] = 0.0;
+            o3i[q] = 0.0;
         }
         int nodes = alpha[0].length;
         for (int j = 0; j < nodes; j++) {
