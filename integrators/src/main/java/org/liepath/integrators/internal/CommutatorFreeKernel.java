@@ -13,7 +13,7 @@ public final class CommutatorFreeKernel extends Kernel {
 
     public CommutatorFreeKernel(LinearSystem sys, double[] nodes, double[][] table, int order) {
         super(sys, nodes.length);
-        if (interaction() && table.length > 1) {
+        if (inFrame() && table.length > 1) {
             // the frame's half-step phases enclose one exponential (InteractionFrame)
             throw new IllegalArgumentException("table: one exponential in the interaction picture, got "
                     + table.length);

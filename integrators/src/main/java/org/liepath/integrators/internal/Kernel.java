@@ -214,11 +214,6 @@ public abstract class Kernel {
         }
     }
 
-    /** @return whether this kernel steps in the interaction picture of a static part */
-    protected final boolean interaction() {
-        return frame != null;
-    }
-
     /** (wr, wi) = Σ_k alpha[k] coef[k] combined with scale s: Σ_k s·alpha_k A(t_k). */
     protected final void combineNodes(double s, double[] alpha, double[] outR, double[] outI) {
         if (frame != null) {

@@ -93,7 +93,7 @@ public final class MagnusKernel extends Kernel {
 
     /** beta[j] = generator weights of Σ_k s·alpha_k A(t_k), G_0's last (as {@link #combineNodes} would pass on). */
     private void weights(int j, double s, double[] alpha) {
-        if (interaction()) {
+        if (inFrame()) {
             return;
         }
         double[] b = beta[j];
@@ -124,7 +124,7 @@ public final class MagnusKernel extends Kernel {
 
     /** Builds the matrices of the selections 0..count−1 (in one pass over the generators, or from node matrices). */
     private void build(int count) {
-        if (interaction()) {
+        if (inFrame()) {
             frame.combinations(count, selScale, selAlpha, coef, selR, selI);
             return;
         }
@@ -243,7 +243,7 @@ public final class MagnusKernel extends Kernel {
      * G_0's weights are the row sums: exactly zero for the odd rows.
      */
     private void eighthWeights() {
-        if (interaction()) {
+        if (inFrame()) {
             return;
         }
         double[] c0 = coef[0], c1 = coef[1], c2 = coef[2], c3 = coef[3];
