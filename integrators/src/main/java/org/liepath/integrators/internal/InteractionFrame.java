@@ -66,6 +66,9 @@ final class InteractionFrame {
     private final double[] er, ei;
     /** Write-only destination of the unused outputs of {@link #combinations}. */
     private final double[] spareR, spareI;
+    /** Holders of a single {@link #combination} passed to {@link #combinations}. */
+    private final double[] oneScale = new double[1];
+    private final double[][] oneAlpha = new double[1][], oneR = new double[1][], oneI = new double[1][];
 
     InteractionFrame(LinearSystem sys, int nodes) {
         this(sys, nodes, (long) Math.max(nodes, 1) * sys.terms * sys.m * sys.m <= TABLE_LIMIT);
@@ -201,7 +204,11 @@ final class InteractionFrame {
     /** out = Σ_j s·alpha_j N_j, the node matrices N_j = Σ_k coef[j][k] Φ_j∘G_k (after {@link #phases}). */
     void combination(double s, double[] alpha, double[][] coef, double[] outR, double[] outI) {
         if (table) {
-            tableCombination(s, alpha, coef, outR, outI);
+            oneScale[0] = s;
+            oneAlpha[0] = alpha;
+            oneR[0] = outR;
+            oneI[0] = outI;
+            combinations(1, oneScale, oneAlpha, coef, oneR, oneI);
             return;
         }
         int len = m * m;
@@ -287,38 +294,6 @@ final class InteractionFrame {
                     o2i[q] += c2 * y;
                     o3r[q] += c3 * x;
                     o3i[q] += c3 * y;
-                }
-            }
-        }
-    }
-
-    private void tableCombination(double s, double[] alpha, double[][] coef, double[] outR, double[] outI) {
-        int len = m * m, terms = sys.terms;
-        java.util.Arrays.fill(outR, 0, len, 0.0);
-        java.util.Arrays.fill(outI, 0, len, 0.0);
-        for (int j = 0; j < alpha.length; j++) {
-            double a = s * alpha[j];
-            if (a == 0.0) {
-                continue;
-            }
-            double[] cj = coef[j];
-            for (int k = 0; k < terms; k++) {
-                double c = a * cj[k];
-                if (c == 0.0) {
-                    continue;
-                }
-                double[] gr = cur.tr[j][k], gi = cur.ti[j][k];
-                int[] idx = nz[k];
-                if (idx == null) {
-                    for (int q = 0; q < len; q++) {
-                        outR[q] += c * gr[q];
-                        outI[q] += c * gi[q];
-                    }
-                } else {
-                    for (int q : idx) {
-                        outR[q] += c * gr[q];
-                        outI[q] += c * gi[q];
-                    }
                 }
             }
         }

@@ -39,29 +39,18 @@ public final class LinearSystem {
 
     private LinearSystem(int m, double[][] gr, double[][] gi, double[] g0r, double[] g0i, Coefficients source,
                          double[] breakpoints, boolean piecewiseConstant, boolean skewHermitian) {
-        this(m, gr, gi, g0r, g0i, source, breakpoints, piecewiseConstant, skewHermitian, null, null, null);
+        this(m, gr, gi, g0r, g0i, source, breakpoints, piecewiseConstant, skewHermitian, null, null, null, null, null);
     }
 
     private LinearSystem(int m, double[][] gr, double[][] gi, double[] g0r, double[] g0i, Coefficients source,
                          double[] breakpoints, boolean piecewiseConstant, boolean skewHermitian,
-                         double[] frameEnergies, double[] frameVr, double[] frameVi) {
+                         double[] frameEnergies, double[] frameVr, double[] frameVi, double[] frameVhr,
+                         double[] frameVhi) {
         this.frameEnergies = frameEnergies;
         this.frameVr = frameVr;
         this.frameVi = frameVi;
-        if (frameVr != null) {
-            int len = m * m;
-            frameVhr = new double[len];
-            frameVhi = new double[len];
-            for (int i = 0; i < m; i++) {
-                for (int j = 0; j < m; j++) {
-                    frameVhr[i * m + j] = frameVr[j * m + i];
-                    frameVhi[i * m + j] = -frameVi[j * m + i];
-                }
-            }
-        } else {
-            frameVhr = null;
-            frameVhi = null;
-        }
+        this.frameVhr = frameVhr;
+        this.frameVhi = frameVhi;
         this.m = m;
         this.terms = gr.length;
         this.gr = gr;
@@ -206,7 +195,7 @@ public final class LinearSystem {
                 }
             }
         }
-        double[] d = new double[n], vr = null, vi = null;
+        double[] d = new double[n], vr = null, vi = null, vhr = null, vhi = null;
         if (diagonal) {
             for (int i = 0; i < n; i++) {
                 d[i] = h0r[i * n + i];
@@ -218,6 +207,14 @@ public final class LinearSystem {
                 throw new ArithmeticException("the eigendecomposition of the static part did not converge");
             }
             orthonormalizeColumns(n, vr, vi);
+            vhr = new double[len];
+            vhi = new double[len];
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < n; j++) {
+                    vhr[i * n + j] = vr[j * n + i];
+                    vhi[i * n + j] = -vi[j * n + i];
+                }
+            }
         }
         int[] idx = java.util.Arrays.copyOf(driven, count);
         double[][] gr = new double[count][], gi = new double[count][];
@@ -228,7 +225,7 @@ public final class LinearSystem {
             if (!diagonal) {
                 // A' = V† A V
                 org.liepath.core.internal.Dense.mul(n, re, im, vr, vi, tr, ti);
-                conjugateTransposeTimes(n, vr, vi, tr, ti, ur, ui);
+                org.liepath.core.internal.Dense.mul(n, vhr, vhi, tr, ti, ur, ui);
                 // Hermitian only to rounding: take the Hermitian part, so that every exponent the schemes form is
                 // anti-Hermitian bit for bit, as in the Schrödinger picture
                 for (int i = 0; i < n; i++) {
@@ -253,7 +250,7 @@ public final class LinearSystem {
         }
         Coefficients source = (t, out) -> h.coefficients(t, idx, out);
         return new LinearSystem(n, gr, gi, null, null, source, h.breakpoints(), h.isPiecewiseConstant(), true, d, vr,
-                vi);
+                vi, vhr, vhi);
     }
 
     /**
@@ -289,24 +286,6 @@ public final class LinearSystem {
                     vr[i * n + j] *= inv;
                     vi[i * n + j] *= inv;
                 }
-            }
-        }
-    }
-
-    /** out = V† X for n×n planar matrices. */
-    private static void conjugateTransposeTimes(int n, double[] vr, double[] vi, double[] xr, double[] xi,
-                                                double[] outR, double[] outI) {
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                double sr = 0, si = 0;
-                for (int k = 0; k < n; k++) {
-                    // conj(V_ki) X_kj
-                    double a = vr[k * n + i], b = -vi[k * n + i], c = xr[k * n + j], e = xi[k * n + j];
-                    sr += a * c - b * e;
-                    si += a * e + b * c;
-                }
-                outR[i * n + j] = sr;
-                outI[i * n + j] = si;
             }
         }
     }
