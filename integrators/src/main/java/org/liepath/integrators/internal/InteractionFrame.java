@@ -1,5 +1,7 @@
 package org.liepath.integrators.internal;
 
+import org.liepath.core.internal.Skew3;
+
 /**
  * The interaction picture of a {@link Kernel} on a system from {@link LinearSystem#interaction}.
  *
@@ -59,7 +61,18 @@ final class InteractionFrame {
         double[][] phr, phi;
         /** Phased generators Φ_j∘G_k on the table route: [node][term][m²]. */
         double[][][] tr, ti;
+        /** The same, packed ({@link Skew3}; three-level Hamiltonian systems on the table route, else null). */
+        double[][][] packed;
     }
+
+    /** Nonzero positions of each packed generator (three levels on the table route), else null. */
+    private final int[][] packedNz;
+    /** Planar scratch for packed combinations off the table route. */
+    private final double[][] scratchR, scratchI;
+    /** Packed node matrices of the current step (three levels on the table route), else null. */
+    private final double[][] packedNodes;
+    /** The packed positions any generator occupies (the union of {@link #packedNz}). */
+    private final int[] packedUsed;
 
     private final Slot[] slots = {new Slot(), new Slot()};
     private Slot cur;
@@ -113,19 +126,51 @@ final class InteractionFrame {
                 }
             }
         }
-        for (Slot s : slots) {
-            if (table) {
-                s.tr = new double[count][terms][len];
-                s.ti = new double[count][terms][len];
+        boolean packed = m == 3 && sys.skewHermitian;
+        packedNz = packed && table ? new int[terms][] : null;
+        double[] union = new double[Skew3.LEN];
+        if (packedNz != null) {
+            double[] g = new double[Skew3.LEN];
+            for (int k = 0; k < terms; k++) {
+                Skew3.pack(sys.gr[k], sys.gi[k], g);
+                // the phases mix real and imaginary parts of an off-diagonal entry: both are kept if either is set
+                for (int q = 3; q < Skew3.LEN; q += 2) {
+                    if (g[q] != 0.0 || g[q + 1] != 0.0) {
+                        g[q] = 1.0;
+                        g[q + 1] = 1.0;
+                    }
+                }
+                packedNz[k] = Kernel.nonzeros(g);
+                for (int q = 0; q < Skew3.LEN; q++) {
+                    union[q] = union[q] != 0.0 || g[q] != 0.0 ? 1.0 : 0.0;
+                }
             }
-            s.phr = new double[count][len];
-            s.phi = new double[count][len];
         }
+        packedUsed = packedNz != null ? Kernel.nonzeros(union) : null;
+        packedNodes = packedNz != null ? new double[count][Skew3.LEN] : null;
+        scratchR = packed && !table ? new double[4][len] : null;
+        scratchI = packed && !table ? new double[4][len] : null;
+        slotNodes = count;
         er = new double[m];
         ei = new double[m];
         spareR = new double[len];
         spareI = new double[len];
         cur = slots[0];
+    }
+
+    /** Node count the slots are sized for. */
+    private final int slotNodes;
+
+    /** Sizes a slot's arrays on its first use (a fixed-step run uses one slot only). */
+    private void allocate(Slot s) {
+        int count = slotNodes, terms = sys.terms, len = m * m;
+        if (table) {
+            s.tr = new double[count][terms][len];
+            s.ti = new double[count][terms][len];
+            s.packed = packedNz != null ? new double[count][terms][Skew3.LEN] : null;
+        }
+        s.phr = new double[count][len];
+        s.phi = new double[count][len];
     }
 
     /** @return whether the static part was diagonal (no basis change per step) */
@@ -143,6 +188,9 @@ final class InteractionFrame {
         }
         // replace the slot not used last
         Slot s = cur == slots[0] ? slots[1] : slots[0];
+        if (s.phr == null) {
+            allocate(s);
+        }
         for (int j = 0; j < nodes.length; j++) {
             double off = (nodes[j] - 0.5) * h;
             for (int a = 0; a < m; a++) {
@@ -178,6 +226,9 @@ final class InteractionFrame {
                         double a = gr[q], b = gi[q], c = fr[q], e = fi[q];
                         or[q] = a * c - b * e;
                         oi[q] = a * e + b * c;
+                    }
+                    if (s.packed != null) {
+                        Skew3.pack(or, oi, s.packed[j][k]);
                     }
                 }
             }
@@ -297,6 +348,88 @@ final class InteractionFrame {
                 }
             }
         }
+    }
+
+    /**
+     * out_i = Σ_j scale_i·alpha_i[j] N_j packed ({@link Skew3}), for i &lt; count ≤ 4: {@link #combinations} for
+     * three-level Hamiltonian systems, scattering the nonzeros of the packed phased generators (off the table
+     * route, the planar combinations packed).
+     */
+    void combinationsPacked(int count, double[] scale, double[][] alpha, double[][] coef, double[][] out) {
+        if (packedNz == null) {
+            combinations(count, scale, alpha, coef, scratchR, scratchI);
+            for (int i = 0; i < count; i++) {
+                Skew3.pack(scratchR[i], scratchI[i], out[i]);
+            }
+            return;
+        }
+        int nodes = alpha[0].length, terms = sys.terms;
+        int[] used = packedUsed;
+        // node matrices first (a scatter of the few nonzeros), then each output as a sum over the nodes at the
+        // positions some generator occupies (the others stay zero); plain loops: for nine entries a call to
+        // Arrays.fill and the for-each over the index arrays cost more than the arithmetic (measured 2×)
+        for (int j = 0; j < nodes; j++) {
+            double[] nj = packedNodes[j], cj = coef[j];
+            double[][] tj = cur.packed[j];
+            for (int q = 0; q < Skew3.LEN; q++) {
+                nj[q] = 0.0;
+            }
+            for (int k = 0; k < terms; k++) {
+                double ck = cj[k];
+                double[] g = tj[k];
+                int[] idx = packedNz[k];
+                for (int i = 0; i < idx.length; i++) {
+                    int q = idx[i];
+                    nj[q] += ck * g[q];
+                }
+            }
+        }
+        if (count == 4 && nodes == 4) {
+            fourByFour(scale, alpha, out);
+            return;
+        }
+        for (int i = 0; i < count; i++) {
+            double[] o = out[i], row = alpha[i];
+            double sc = scale[i];
+            for (int q = 0; q < Skew3.LEN; q++) {
+                o[q] = 0.0;
+            }
+            for (int j = 0; j < nodes; j++) {
+                double c = sc * row[j];
+                double[] nj = packedNodes[j];
+                for (int u = 0; u < used.length; u++) {
+                    int q = used[u];
+                    o[q] += c * nj[q];
+                }
+            }
+        }
+    }
+
+    /**
+     * The four outputs of four nodes (Magnus 8) in one pass over the entries, the sixteen weights in registers: the
+     * general loops cost twice as much for this size, spent on their indexing rather than the 144 multiply–adds.
+     */
+    private void fourByFour(double[] scale, double[][] alpha, double[][] out) {
+        double[] r0 = alpha[0], r1 = alpha[1], r2 = alpha[2], r3 = alpha[3];
+        double s0 = scale[0], s1 = scale[1], s2 = scale[2], s3 = scale[3];
+        double c00 = s0 * r0[0], c01 = s0 * r0[1], c02 = s0 * r0[2], c03 = s0 * r0[3];
+        double c10 = s1 * r1[0], c11 = s1 * r1[1], c12 = s1 * r1[2], c13 = s1 * r1[3];
+        double c20 = s2 * r2[0], c21 = s2 * r2[1], c22 = s2 * r2[2], c23 = s2 * r2[3];
+        double c30 = s3 * r3[0], c31 = s3 * r3[1], c32 = s3 * r3[2], c33 = s3 * r3[3];
+        double[] n0 = packedNodes[0], n1 = packedNodes[1], n2 = packedNodes[2], n3 = packedNodes[3];
+        double[] o0 = out[0], o1 = out[1], o2 = out[2], o3 = out[3];
+        for (int q = 0; q < Skew3.LEN; q++) {
+            double x0 = n0[q], x1 = n1[q], x2 = n2[q], x3 = n3[q];
+            o0[q] = c00 * x0 + c01 * x1 + c02 * x2 + c03 * x3;
+            o1[q] = c10 * x0 + c11 * x1 + c12 * x2 + c13 * x3;
+            o2[q] = c20 * x0 + c21 * x1 + c22 * x2 + c23 * x3;
+            o3[q] = c30 * x0 + c31 * x1 + c32 * x2 + c33 * x3;
+        }
+    }
+
+    /** x ← Φ∘x for a packed x ({@link Skew3}): {@link #conjugate} for three levels. */
+    void conjugatePacked(double s, double[] x) {
+        Skew3.conjugate(x, dc[0] * s, dc[1] * s, dc[2] * s);
     }
 
     /**

@@ -4,6 +4,7 @@ import org.liepath.core.internal.Dense;
 import org.liepath.core.internal.Expm;
 import org.liepath.core.internal.HermitianExp;
 import org.liepath.core.internal.KrylovWorkspace;
+import org.liepath.core.internal.Skew3;
 
 import java.util.Arrays;
 
@@ -18,10 +19,13 @@ import java.util.Arrays;
 public abstract class Kernel {
     protected final LinearSystem sys;
     protected final int m;
-    protected final Expm expm;
+    /** Padé workspace, created on first use (the packed three-level route needs it only for exponents beyond its
+     * limit; a workspace per run costs more than the few steps of a small run). */
+    private Expm expm;
     /** Eigen-based exp(−iτK) for anti-Hermitian exponents (Hamiltonian systems), else null. */
-    protected final HermitianExp hexp;
-    private final double[] kr, ki;
+    private HermitianExp hexp;
+    /** Scratch of the eigen and Krylov routes, created on first use. */
+    private double[] kr, ki;
     /** Whether every real combination of generators (and so every commutator operand) is anti-Hermitian. */
     private final boolean skew;
     /** Krylov action of the exponential for vector states of large dimension, else null. */
@@ -30,7 +34,9 @@ public abstract class Kernel {
     /** Scratch: exponent and exponential (m×m). */
     protected final double[] wr, wi, er, ei;
     /** Scratch state (m×m) for products and for trial steps. */
-    protected final double[] sr, si, zr, zi, yr2, yi2;
+    protected final double[] sr, si;
+    /** Scratch of {@link #trial}, created on first use (fixed-step runs never need it). */
+    private double[] yr2, yi2;
     /** Node coefficients: coef[node][term]. */
     protected final double[][] coef;
     /** Combined weights per term. */
@@ -41,6 +47,17 @@ public abstract class Kernel {
     private final double[] fr1, fi1;
     /** The frame's origin t_r and the midpoint of the step being taken. */
     private double frameOrigin, frameMid;
+    /**
+     * Packed arithmetic for Hamiltonian systems of three levels ({@link Skew3}), else null: exponents are formed and
+     * exponentiated on the nine reals that fix a 3×3 anti-Hermitian matrix.
+     */
+    protected final Skew3 skew3;
+    /** Packed generators (driven terms) and constant part (null if none), their nonzero positions; three levels. */
+    private final double[][] packedG;
+    private final double[] packedG0;
+    private final int[][] packedNz;
+    /** Scratch for a packed exponent taken from planar arrays, and for its planar copy on the eigen route. */
+    private final double[] packedW, unpackedR, unpackedI;
 
     public long evaluations;
     public long exponentials;
@@ -49,14 +66,15 @@ public abstract class Kernel {
     public long steps;
 
     protected Kernel(LinearSystem sys, int nodes) {
+        this(sys, nodes, true);
+    }
+
+    /** @param allowPacked whether three-level Hamiltonian systems take the packed route (false: planar, for tests) */
+    Kernel(LinearSystem sys, int nodes, boolean allowPacked) {
         this.sys = sys;
         this.m = sys.m;
         int len = m * m;
-        expm = new Expm(m);
-        hexp = sys.skewHermitian ? new HermitianExp(m) : null;
         skew = sys.skewHermitian;
-        kr = sys.skewHermitian ? new double[len] : null;
-        ki = sys.skewHermitian ? new double[len] : null;
         krylov = m >= KRYLOV_MIN_DIM ? new KrylovWorkspace(m, KRYLOV_DIM) : null;
         vr = new double[m];
         vi = new double[m];
@@ -66,16 +84,135 @@ public abstract class Kernel {
         ei = new double[len];
         sr = new double[len];
         si = new double[len];
-        zr = new double[len];
-        zi = new double[len];
-        yr2 = new double[len];
-        yi2 = new double[len];
         coef = new double[Math.max(nodes, 1)][sys.terms];
         w = new double[sys.terms];
         frame = sys.isInteractionPicture() ? new InteractionFrame(sys, nodes) : null;
-        boolean change = frame != null;
+        boolean change = frame != null && !frame.diagonal();
         fr1 = change ? new double[len] : null;
         fi1 = change ? new double[len] : null;
+        boolean packed = allowPacked && m == 3 && skew;
+        skew3 = packed ? new Skew3() : null;
+        packedW = packed ? new double[Skew3.LEN] : null;
+        unpackedR = packed ? new double[len] : null;
+        unpackedI = packed ? new double[len] : null;
+        packedG = packed ? new double[sys.terms][Skew3.LEN] : null;
+        packedNz = packed ? new int[sys.terms][] : null;
+        if (packed) {
+            for (int k = 0; k < sys.terms; k++) {
+                Skew3.pack(sys.gr[k], sys.gi[k], packedG[k]);
+                packedNz[k] = nonzeros(packedG[k]);
+            }
+            if (sys.g0r != null) {
+                packedG0 = new double[Skew3.LEN];
+                Skew3.pack(sys.g0r, sys.g0i, packedG0);
+            } else {
+                packedG0 = null;
+            }
+        } else {
+            packedG0 = null;
+        }
+    }
+
+    /** @return the positions of the nonzero entries of a packed matrix */
+    static int[] nonzeros(double[] x) {
+        int c = 0;
+        for (double v : x) {
+            c += v != 0.0 ? 1 : 0;
+        }
+        int[] idx = new int[c];
+        for (int q = 0, i = 0; q < x.length; q++) {
+            if (x[q] != 0.0) {
+                idx[i++] = q;
+            }
+        }
+        return idx;
+    }
+
+    private void skewScratch() {
+        if (kr == null) {
+            kr = new double[m * m];
+            ki = new double[m * m];
+        }
+    }
+
+    /** @return the Padé workspace, created on first use */
+    private Expm expm() {
+        if (expm == null) {
+            expm = new Expm(m);
+        }
+        return expm;
+    }
+
+    /** @return whether every entry of X (len entries) is finite: x·0 is 0 for finite x and NaN otherwise */
+    static boolean finite(int len, double[] xr, double[] xi) {
+        double z = 0.0;
+        for (int q = 0; q < len; q++) {
+            z += xr[q] * 0.0 + xi[q] * 0.0;
+        }
+        return z == 0.0;
+    }
+
+    /** @return whether exponents of this kernel are packed 3×3 anti-Hermitian matrices ({@link Skew3}) */
+    protected final boolean packed() {
+        return skew3 != null;
+    }
+
+    /**
+     * out_i = Σ_j scale_i·alpha_i[j] A(t_j) packed, for i &lt; count ≤ 4 (three-level Hamiltonian systems, after
+     * {@link #evaluate}); in the interaction picture the node values of the step's frame.
+     */
+    protected final void combinePacked(int count, double[] scale, double[][] alpha, double[][] out) {
+        if (frame != null) {
+            frame.combinationsPacked(count, scale, alpha, coef, out);
+            return;
+        }
+        for (int i = 0; i < count; i++) {
+            double[] o = out[i];
+            double w0 = nodeWeights(scale[i], alpha[i], w);
+            if (packedG0 != null) {
+                for (int q = 0; q < Skew3.LEN; q++) {
+                    o[q] = w0 * packedG0[q];
+                }
+            } else {
+                Arrays.fill(o, 0.0);
+            }
+            for (int k = 0; k < packedG.length; k++) {
+                double c = w[k];
+                if (c == 0.0) {
+                    continue;
+                }
+                double[] g = packedG[k];
+                for (int q : packedNz[k]) {
+                    o[q] += c * g[q];
+                }
+            }
+        }
+    }
+
+    /**
+     * X ← exp(Ω) X for a packed exponent Ω (three levels; Ω is modified in the interaction picture, carried to the
+     * frame of the origin), in the increment form of {@link #expApply}.
+     */
+    protected final void expApplyPacked(double[] om, int p, double[] xr, double[] xi) {
+        if (frame != null) {
+            frame.conjugatePacked(frameMid - frameOrigin, om);
+        }
+        incrementPacked(1.0, om, er, ei);
+        addLeft(p, er, ei, xr, xi);
+    }
+
+    /** out = exp(scale·Ω) − I for a packed Ω, as {@link #increment} (Padé up to its limit, else the eigen route). */
+    private void incrementPacked(double scale, double[] om, double[] outR, double[] outI) {
+        exponentials++;
+        if (skew3.increment(scale, om, outR, outI, PADE_LIMIT)) {
+            return;
+        }
+        exponentials--; // counted again by exponential()
+        Skew3.unpack(om, unpackedR, unpackedI);
+        exponential(scale, unpackedR, unpackedI, outR, outI);
+        for (int i = 0; i < m; i++) {
+            outR[i * m + i] -= 1;
+        }
     }
 
     /** @return the classical order of the propagated result */
@@ -99,6 +236,10 @@ public abstract class Kernel {
      */
     public double trial(double t, double h, int p, double[] xr, double[] xi, double[] yr, double[] yi) {
         int len = m * p;
+        if (yr2 == null) {
+            yr2 = new double[m * m];
+            yi2 = new double[m * m];
+        }
         System.arraycopy(xr, 0, yr, 0, len);
         System.arraycopy(xi, 0, yi, 0, len);
         System.arraycopy(xr, 0, yr2, 0, len);
@@ -342,14 +483,19 @@ public abstract class Kernel {
      * must not alias inputs.
      */
     protected final void increment(double scale, double[] omR, double[] omI, double[] outR, double[] outI) {
-        if (hexp == null) {
+        if (skew3 != null) {
+            Skew3.pack(omR, omI, packedW);
+            incrementPacked(scale, packedW, outR, outI);
+            return;
+        }
+        if (!skew) {
             exponentials++;
-            expm.computeIncrement(scale, omR, omI, outR, outI);
+            expm().computeIncrement(scale, omR, omI, outR, outI);
             return;
         }
         // the workspace tests the norm it selects the degree by (after removing the Gershgorin centre, so a large
         // energy offset alone does not force the eigen route); m ≤ 2 always proceeds (closed forms)
-        if (expm.computeIncrementAntiHermitian(scale, omR, omI, outR, outI, PADE_LIMIT)) {
+        if (expm().computeIncrementAntiHermitian(scale, omR, omI, outR, outI, PADE_LIMIT)) {
             exponentials++;
             return;
         }
@@ -382,28 +528,33 @@ public abstract class Kernel {
             Expm.exp2(scale, 0.0, omR, omI, outR, outI);
             return;
         }
-        if (hexp == null || Math.abs(scale) * Dense.norm1(m, omR, omI) <= PADE_LIMIT) {
-            expm.compute(scale, omR, omI, outR, outI);
+        if (!skew || Math.abs(scale) * Dense.norm1(m, omR, omI) <= PADE_LIMIT) {
+            expm().compute(scale, omR, omI, outR, outI);
             return;
         }
         int len = m * m;
+        skewScratch();
         for (int q = 0; q < len; q++) {
             kr[q] = -omI[q];
             ki[q] = omR[q];
+        }
+        if (hexp == null) {
+            hexp = new HermitianExp(m);
         }
         hexp.compute(kr, ki, scale, outR, outI);
     }
 
     /** @return whether large exponents are computed by the unitary eigen route (Hamiltonian systems) */
     protected final boolean unitaryExponentials() {
-        return hexp != null;
+        return skew;
     }
 
     /** x ← exp(Ω) x by Krylov; false (x unchanged) if the sub-step limit was hit, so the dense route takes over. */
     private boolean krylovApply(double[] omR, double[] omI, double[] xr, double[] xi) {
         boolean ok;
-        if (hexp != null) {
+        if (skew) {
             int len = m * m;
+            skewScratch();
             for (int q = 0; q < len; q++) {
                 kr[q] = -omI[q];
                 ki[q] = omR[q];

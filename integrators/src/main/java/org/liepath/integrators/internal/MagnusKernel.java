@@ -1,5 +1,7 @@
 package org.liepath.integrators.internal;
 
+import org.liepath.core.internal.Skew3;
+
 /**
  * Magnus integrators on Gauss–Legendre nodes: X ← exp(Ω) X with one exponential of a truncated Magnus exponent.
  *
@@ -19,6 +21,11 @@ package org.liepath.integrators.internal;
  * of Q3 of order 8) come from the stored [G_k, G_l] instead of a matrix product: the same Ω up to rounding. The
  * {@link #commutators} counter counts the scheme's commutators (1, 3 or 10 per step) whichever route computes
  * them.
+ *
+ * <p>Three levels: for a Hamiltonian system of dimension 3 the exponent is formed on packed anti-Hermitian
+ * matrices ({@link Skew3}: nine reals, brackets of 48 products) and exponentiated packed, the same formulas term by
+ * term ({@code fourthPacked}, {@code sixthPacked}, {@code eighthPacked}); the result equals the planar route's to
+ * rounding (tested) at about 0.55 of its time per step on a driven three-level system.
  *
  * <p>Mutable and not thread-safe, like every {@link Kernel}: one instance per run or per stepper.
  */
@@ -40,6 +47,11 @@ public final class MagnusKernel extends Kernel {
     /** Addends and destinations of the commutators of one {@link GeneratorPairs#combine} call. */
     private final double[][] addR = new double[3][], addI = new double[3][], pairR = new double[3][],
             pairI = new double[3][];
+    /** Packed scratch matrices of the three-level route ({@link Skew3}), else null. */
+    private final double[][] pk;
+    /** Selected rows and destinations of one {@link #combinePacked} call. */
+    private final double[][] pkAlpha = new double[4][], pkOut = new double[4][];
+    private final double[] pkScale = new double[4];
 
     public MagnusKernel(LinearSystem sys, int order) {
         this(sys, order, GeneratorPairs.pays(sys, order));
@@ -47,21 +59,31 @@ public final class MagnusKernel extends Kernel {
 
     /** @param usePairs whether first-level commutators come from stored generator pairs (forced, for tests) */
     MagnusKernel(LinearSystem sys, int order, boolean usePairs) {
-        super(sys, order / 2);
+        this(sys, order, usePairs, true);
+    }
+
+    /**
+     * @param usePairs    whether first-level commutators come from stored generator pairs (forced, for tests)
+     * @param allowPacked whether a three-level Hamiltonian system takes the packed route of {@link Skew3} (false:
+     *                    the planar route, for tests comparing the two)
+     */
+    MagnusKernel(LinearSystem sys, int order, boolean usePairs, boolean allowPacked) {
+        super(sys, order / 2, allowPacked);
         if (order != 4 && order != 6 && order != 8) {
             throw new IllegalArgumentException("order " + order);
         }
         this.order = order;
         this.nodes = order == 4 ? Tables.GAUSS2 : order == 6 ? Tables.GAUSS3 : Tables.GAUSS4;
         int count = order == 4 ? 6 : order == 6 ? 14 : 26;
-        m6 = new double[count][m * m];
+        m6 = packed() ? null : new double[count][m * m];
         // stored generator pairs need fixed generators; in the interaction picture they rotate with the frame
-        pairs = usePairs && !sys.isInteractionPicture() ? new GeneratorPairs(sys, (ar, ai, br, bi, cr, ci) -> bracket(1.0, ar, ai, br, bi, cr, ci))
+        pk = packed() ? new double[16][Skew3.LEN] : null;
+        pairs = usePairs && !sys.isInteractionPicture() && !packed() ? new GeneratorPairs(sys, (ar, ai, br, bi, cr, ci) -> bracket(1.0, ar, ai, br, bi, cr, ci))
                 : null;
         int n = sys.generators();
-        beta = new double[4][n];
-        x = new double[n];
-        y = new double[n];
+        beta = packed() ? null : new double[4][n];
+        x = pairs != null ? new double[n] : null;
+        y = pairs != null ? new double[n] : null;
     }
 
     /**
@@ -87,8 +109,105 @@ public final class MagnusKernel extends Kernel {
     @Override
     public void step(double t, double h, int p, double[] xr, double[] xi) {
         evaluate(t, h, nodes);
+        if (pk != null) {
+            double[] om = pk[15];
+            if (order == 4) {
+                fourthPacked(h, om);
+            } else if (order == 6) {
+                sixthPacked(h, om);
+            } else {
+                eighthPacked(h, om);
+            }
+            expApplyPacked(om, p, xr, xi);
+            return;
+        }
         exponent(h);
         expApply(wr, wi, p, xr, xi);
+    }
+
+    /** Selects packed destination j of the next {@link #buildPacked}: Σ_k s·alpha_k A(t_k). */
+    private void usePacked(int j, double s, double[] alpha, double[] out) {
+        pkScale[j] = s;
+        pkAlpha[j] = alpha;
+        pkOut[j] = out;
+    }
+
+    private void buildPacked(int count) {
+        combinePacked(count, pkScale, pkAlpha, pkOut);
+    }
+
+    /** out = s·[x, y] packed, counted as one of the scheme's commutators. */
+    private void commutatorPacked(double s, double[] x, double[] y, double[] out) {
+        commutators++;
+        Skew3.bracket(s, x, y, out);
+    }
+
+    /** out = s·[a·x + b·y, z] packed, counted as one commutator. */
+    private void commutatorPacked(double s, double a, double[] x, double b, double[] y, double[] z, double[] out) {
+        commutators++;
+        Skew3.bracket(s, a, x, b, y, z, out);
+    }
+
+    // The packed forms below are the planar fourth, sixth and eighth term by term (same formulas, same sources).
+
+    private void fourthPacked(double h, double[] om) {
+        double[] a1 = pk[0], a2 = pk[1], c = pk[2];
+        usePacked(0, 1.0, UNIT2[0], a1);
+        usePacked(1, 1.0, UNIT2[1], a2);
+        buildPacked(2);
+        commutatorPacked(-SQRT3_12 * h * h, a1, a2, c);
+        Skew3.lin(0.5 * h, a1, 0.5 * h, a2, 1.0, c, om);
+    }
+
+    private void sixthPacked(double h, double[] om) {
+        double[] a1 = pk[0], a2 = pk[1], a3 = pk[2], c1 = pk[3], t = pk[4], c2 = pk[5], d = pk[6];
+        usePacked(0, h, ALPHA1, a1);
+        usePacked(1, h * SQRT15_3, ALPHA2, a2);
+        usePacked(2, h * 10.0 / 3, ALPHA3, a3);
+        buildPacked(3);
+        commutatorPacked(1.0, a1, a2, c1);                                  // C1 = [α1, α2]
+        Skew3.lin(2.0, a3, 1.0, c1, t);                                     // 2α3 + C1
+        commutatorPacked(-1.0 / 60, a1, t, c2);                             // C2 = −[α1, 2α3 + C1]/60
+        Skew3.lin(-20.0, a1, -1.0, a3, 1.0, c1, t);                         // −20α1 − α3 + C1
+        Skew3.lin(1.0, a2, 1.0, c2, c2);                                    // α2 + C2
+        commutatorPacked(1.0 / 240, t, c2, d);                              // [·,·]/240
+        Skew3.lin(1.0, a1, 1.0 / 12, a3, 1.0, d, om);                       // Ω^[6]
+    }
+
+    private void eighthPacked(double h, double[] om) {
+        double[] b0 = pk[0], b1 = pk[1], b2 = pk[2], b3 = pk[3], q1 = pk[4], q2 = pk[5], q3 = pk[6], q4 = pk[7];
+        double[] q5 = pk[8], q6 = pk[9], x = pk[10], y = pk[11], u = pk[12];
+        usePacked(0, 1.0, ROW_B0, b0);
+        usePacked(1, 1.0, ROW_B1, b1);
+        usePacked(2, 1.0, ROW_B2, b2);
+        usePacked(3, 1.0, ROW_B3, b3);
+        buildPacked(4);
+        // Q1 = [−38 B0/5 + 24 B2, B3]
+        commutatorPacked(1.0, -38.0 / 5, b0, 24.0, b2, b3, q1);
+        // Q2 = [63 B0/5 − 84 B2, −5 B1/28 + B3]
+        Skew3.lin(-5.0 / 28, b1, 1.0, b3, y);
+        commutatorPacked(1.0, 63.0 / 5, b0, -84.0, b2, y, q2);
+        // Q3 = [19 B0/28 − 15 B2/7, [B0, B2 + h(61 Q1/588 − Q2/12)]]
+        Skew3.lin(1.0, b2, 61.0 / 588 * h, q1, -h / 12, q2, x);
+        commutatorPacked(1.0, b0, x, y);
+        commutatorPacked(1.0, 19.0 / 28, b0, -15.0 / 7, b2, y, q3);
+        // Q4 = [B3, 20 Q1/7 + 10 Q2] = −[20 Q1/7 + 10 Q2, B3]
+        commutatorPacked(-1.0, 20.0 / 7, q1, 10.0, q2, b3, q4);
+        // Q5 = [−6025 B0/4116 + 2875 B2/343, [B2, Q1]]
+        commutatorPacked(1.0, b2, q1, y);
+        commutatorPacked(1.0, -6025.0 / 4116, b0, 2875.0 / 343, b2, y, q5);
+        // Q6 = [B3, 20(Q3 + Q4)/7 + 820 h Q5/189]
+        Skew3.lin(20.0 / 7, q3, 20.0 / 7, q4, 820.0 * h / 189, q5, x);
+        commutatorPacked(1.0, b3, x, q6);
+        // Q7 = −[B0, [B0, Q3 − Q4/3 + h Q5]]/42
+        Skew3.lin(1.0, q3, -1.0 / 3, q4, h, q5, x);
+        commutatorPacked(1.0, b0, x, y);
+        commutatorPacked(1.0, b0, y, u);
+        double h2 = h * h, h3 = h2 * h, h4 = h3 * h, h5 = h4 * h;
+        double c7 = -h5 / 42;
+        for (int q = 0; q < Skew3.LEN; q++) {
+            om[q] = h * b0[q] + h2 * (q1[q] + q2[q]) + h3 * (q3[q] + q4[q]) + h4 * (q5[q] + q6[q]) + c7 * u[q];
+        }
     }
 
     /** beta[j] = generator weights of Σ_k s·alpha_k A(t_k), G_0's last (as {@link #combineNodes} would pass on). */

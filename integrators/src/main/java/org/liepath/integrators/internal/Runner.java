@@ -160,7 +160,7 @@ public final class Runner {
                 fail(Run.Outcome.DRIVE_FAILED, e.getMessage());
                 return;
             }
-            if (!Double.isFinite(Kernel.norm(len, xr, xi))) {
+            if (!Kernel.finite(len, xr, xi)) {
                 System.arraycopy(br, 0, xr, 0, len);
                 System.arraycopy(bi, 0, xi, 0, len);
                 stateTime = tk;
@@ -218,7 +218,7 @@ public final class Runner {
                 fail(Run.Outcome.DRIVE_FAILED, e.getMessage());
                 break;
             }
-            if (!Double.isFinite(Kernel.norm(len, yr, yi))) {
+            if (!Kernel.finite(len, yr, yi)) {
                 fail(Run.Outcome.NON_FINITE, "the state became non-finite in a step from t = " + t
                         + " of length " + dir * hTry);
                 break;

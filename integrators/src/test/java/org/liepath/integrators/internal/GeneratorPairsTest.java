@@ -79,7 +79,8 @@ class GeneratorPairsTest {
         int m = sys.dim(), len = m * m;
         double worst = 0;
         for (int order : new int[]{4, 6, 8}) {
-            MagnusKernel direct = new MagnusKernel(sys, order, false), pairs = new MagnusKernel(sys, order, true);
+            // the planar route: the packed three-level route of MagnusKernel does not use stored pairs
+            MagnusKernel direct = new MagnusKernel(sys, order, false, false), pairs = new MagnusKernel(sys, order, true, false);
             assertTrue(pairs.usesPairs());
             assertFalse(direct.usesPairs());
             double[][] x = new double[4][len];
