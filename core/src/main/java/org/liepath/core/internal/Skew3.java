@@ -473,7 +473,7 @@ public final class Skew3 {
         double r00 = mr[0], i00 = mi[0], r01 = mr[1], i01 = mi[1], r02 = mr[2], i02 = mi[2];
         double r10 = mr[3], i10 = mi[3], r11 = mr[4], i11 = mi[4], r12 = mr[5], i12 = mi[5];
         double r20 = mr[6], i20 = mi[6], r21 = mr[7], i21 = mi[7], r22 = mr[8], i22 = mi[8];
-        double den = r00 * r00 + i00 * i00, p0r = r00 / den, p0i = -i00 / den;
+        double inv = 1.0 / (r00 * r00 + i00 * i00), p0r = r00 * inv, p0i = -i00 * inv;
         double l10r = r10 * p0r - i10 * p0i, l10i = r10 * p0i + i10 * p0r;
         double l20r = r20 * p0r - i20 * p0i, l20i = r20 * p0i + i20 * p0r;
         // Schur complement of m00
@@ -481,12 +481,12 @@ public final class Skew3 {
         double s12r = r12 - (l10r * r02 - l10i * i02), s12i = i12 - (l10r * i02 + l10i * r02);
         double s21r = r21 - (l20r * r01 - l20i * i01), s21i = i21 - (l20r * i01 + l20i * r01);
         double s22r = r22 - (l20r * r02 - l20i * i02), s22i = i22 - (l20r * i02 + l20i * r02);
-        den = s11r * s11r + s11i * s11i;
-        double p1r = s11r / den, p1i = -s11i / den;
+        inv = 1.0 / (s11r * s11r + s11i * s11i);
+        double p1r = s11r * inv, p1i = -s11i * inv;
         double l21r = s21r * p1r - s21i * p1i, l21i = s21r * p1i + s21i * p1r;
         double t22r = s22r - (l21r * s12r - l21i * s12i), t22i = s22i - (l21r * s12i + l21i * s12r);
-        den = t22r * t22r + t22i * t22i;
-        double p2r = t22r / den, p2i = -t22i / den;
+        inv = 1.0 / (t22r * t22r + t22i * t22i);
+        double p2r = t22r * inv, p2i = -t22i * inv;
         for (int j = 0; j < 3; j++) {
             double y0r = outR[j], y0i = outI[j];
             double y1r = outR[3 + j] - (l10r * y0r - l10i * y0i), y1i = outI[3 + j] - (l10r * y0i + l10i * y0r);

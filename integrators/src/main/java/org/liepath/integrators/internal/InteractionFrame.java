@@ -108,8 +108,8 @@ final class InteractionFrame {
         vhr = sys.frameVhr;
         vhi = sys.frameVhi;
         int len = m * m, count = Math.max(nodes, 1), terms = sys.terms;
-        nr = table ? null : new double[count][len];
-        ni = table ? null : new double[count][len];
+        nr = table ? null : Scratch.rows(count, len);
+        ni = table ? null : Scratch.rows(count, len);
         nz = new int[terms][];
         for (int k = 0; k < terms; k++) {
             int c = 0;
@@ -147,9 +147,9 @@ final class InteractionFrame {
             }
         }
         packedUsed = packedNz != null ? Kernel.nonzeros(union) : null;
-        packedNodes = packedNz != null ? new double[count][Skew3.LEN] : null;
-        scratchR = packed && !table ? new double[4][len] : null;
-        scratchI = packed && !table ? new double[4][len] : null;
+        packedNodes = packedNz != null ? Scratch.rows(count, Skew3.LEN) : null;
+        scratchR = packed && !table ? Scratch.rows(4, len) : null;
+        scratchI = packed && !table ? Scratch.rows(4, len) : null;
         slotNodes = count;
         er = new double[m];
         ei = new double[m];
@@ -165,12 +165,12 @@ final class InteractionFrame {
     private void allocate(Slot s) {
         int count = slotNodes, terms = sys.terms, len = m * m;
         if (table) {
-            s.tr = new double[count][terms][len];
-            s.ti = new double[count][terms][len];
-            s.packed = packedNz != null ? new double[count][terms][Skew3.LEN] : null;
+            s.tr = Scratch.rows(count, terms, len);
+            s.ti = Scratch.rows(count, terms, len);
+            s.packed = packedNz != null ? Scratch.rows(count, terms, Skew3.LEN) : null;
         }
-        s.phr = new double[count][len];
-        s.phi = new double[count][len];
+        s.phr = Scratch.rows(count, len);
+        s.phi = Scratch.rows(count, len);
     }
 
     /** @return whether the static part was diagonal (no basis change per step) */

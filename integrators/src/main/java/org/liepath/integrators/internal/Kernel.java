@@ -84,7 +84,7 @@ public abstract class Kernel {
         ei = new double[len];
         sr = new double[len];
         si = new double[len];
-        coef = new double[Math.max(nodes, 1)][sys.terms];
+        coef = Scratch.rows(Math.max(nodes, 1), sys.terms);
         w = new double[sys.terms];
         frame = sys.isInteractionPicture() ? new InteractionFrame(sys, nodes) : null;
         boolean change = frame != null && !frame.diagonal();
@@ -95,7 +95,7 @@ public abstract class Kernel {
         packedW = packed ? new double[Skew3.LEN] : null;
         unpackedR = packed ? new double[len] : null;
         unpackedI = packed ? new double[len] : null;
-        packedG = packed ? new double[sys.terms][Skew3.LEN] : null;
+        packedG = packed ? Scratch.rows(sys.terms, Skew3.LEN) : null;
         packedNz = packed ? new int[sys.terms][] : null;
         if (packed) {
             for (int k = 0; k < sys.terms; k++) {
@@ -143,13 +143,17 @@ public abstract class Kernel {
         return expm;
     }
 
-    /** @return whether every entry of X (len entries) is finite: x·0 is 0 for finite x and NaN otherwise */
+    /**
+     * @return whether every entry of X (len entries) is finite (independent comparisons, false for NaN; a running sum
+     *     would chain its additions)
+     */
     static boolean finite(int len, double[] xr, double[] xi) {
-        double z = 0.0;
         for (int q = 0; q < len; q++) {
-            z += xr[q] * 0.0 + xi[q] * 0.0;
+            if (!(Math.abs(xr[q]) <= Double.MAX_VALUE && Math.abs(xi[q]) <= Double.MAX_VALUE)) {
+                return false;
+            }
         }
-        return z == 0.0;
+        return true;
     }
 
     /** @return whether exponents of this kernel are packed 3×3 anti-Hermitian matrices ({@link Skew3}) */

@@ -75,13 +75,13 @@ public final class MagnusKernel extends Kernel {
         this.order = order;
         this.nodes = order == 4 ? Tables.GAUSS2 : order == 6 ? Tables.GAUSS3 : Tables.GAUSS4;
         int count = order == 4 ? 6 : order == 6 ? 14 : 26;
-        m6 = packed() ? null : new double[count][m * m];
+        m6 = packed() ? null : Scratch.rows(count, m * m);
         // stored generator pairs need fixed generators; in the interaction picture they rotate with the frame
-        pk = packed() ? new double[16][Skew3.LEN] : null;
+        pk = packed() ? Scratch.rows(16, Skew3.LEN) : null;
         pairs = usePairs && !sys.isInteractionPicture() && !packed() ? new GeneratorPairs(sys, (ar, ai, br, bi, cr, ci) -> bracket(1.0, ar, ai, br, bi, cr, ci))
                 : null;
         int n = sys.generators();
-        beta = packed() ? null : new double[4][n];
+        beta = packed() ? null : Scratch.rows(4, n);
         x = pairs != null ? new double[n] : null;
         y = pairs != null ? new double[n] : null;
     }
