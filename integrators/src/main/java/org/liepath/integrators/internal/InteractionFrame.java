@@ -71,6 +71,8 @@ final class InteractionFrame {
     private final double[][] scratchR, scratchI;
     /** Packed node matrices of the current step (three levels on the table route), else null. */
     private final double[][] packedNodes;
+    /** The packed generators (three levels on the table route), else null. */
+    private final double[][] packedGenerators;
     /** The packed positions any generator occupies (the union of {@link #packedNz}). */
     private final int[] packedUsed;
 
@@ -89,8 +91,18 @@ final class InteractionFrame {
 
     /** @param table whether to use the table route (forced, for tests) */
     InteractionFrame(LinearSystem sys, int nodes, boolean table) {
+        this(sys, nodes, table, false);
+    }
+
+    /**
+     * @param table      whether to use the table route (forced, for tests)
+     * @param packedOnly whether the kernel combines node values only packed ({@link #combinationsPacked}; three
+     *                   levels on the table route): the planar tables and phases are then never formed
+     */
+    InteractionFrame(LinearSystem sys, int nodes, boolean table, boolean packedOnly) {
         this.sys = sys;
         this.table = table;
+        this.packedOnly = packedOnly && table && sys.m == 3 && sys.skewHermitian;
         m = sys.m;
         d = sys.frameEnergies;
         double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
@@ -129,10 +141,12 @@ final class InteractionFrame {
         boolean packed = m == 3 && sys.skewHermitian;
         packedNz = packed && table ? new int[terms][] : null;
         double[] union = new double[Skew3.LEN];
+        packedGenerators = packedNz != null ? Scratch.rows(terms, Skew3.LEN) : null;
         if (packedNz != null) {
             double[] g = new double[Skew3.LEN];
             for (int k = 0; k < terms; k++) {
                 Skew3.pack(sys.gr[k], sys.gi[k], g);
+                System.arraycopy(g, 0, packedGenerators[k], 0, Skew3.LEN);
                 // the phases mix real and imaginary parts of an off-diagonal entry: both are kept if either is set
                 for (int q = 3; q < Skew3.LEN; q += 2) {
                     if (g[q] != 0.0 || g[q + 1] != 0.0) {
@@ -160,10 +174,17 @@ final class InteractionFrame {
 
     /** Node count the slots are sized for. */
     private final int slotNodes;
+    /** Whether only packed tables are kept (see the constructor). */
+    private final boolean packedOnly;
 
     /** Sizes a slot's arrays on its first use (a fixed-step run uses one slot only). */
     private void allocate(Slot s) {
         int count = slotNodes, terms = sys.terms, len = m * m;
+        if (packedOnly) {
+            s.packed = Scratch.rows(count, terms, Skew3.LEN);
+            s.phr = NONE;
+            return;
+        }
         if (table) {
             s.tr = Scratch.rows(count, terms, len);
             s.ti = Scratch.rows(count, terms, len);
@@ -190,6 +211,10 @@ final class InteractionFrame {
         Slot s = cur == slots[0] ? slots[1] : slots[0];
         if (s.phr == null) {
             allocate(s);
+        }
+        if (packedOnly) {
+            packedPhases(s, h, nodes);
+            return;
         }
         for (int j = 0; j < nodes.length; j++) {
             double off = (nodes[j] - 0.5) * h;
@@ -238,6 +263,49 @@ final class InteractionFrame {
         cur = s;
     }
 
+    private void requirePlanar() {
+        if (packedOnly) {
+            throw new IllegalStateException("planar combination on a packed-only frame");
+        }
+    }
+
+    /** Marks a packed-only slot as allocated (it has no planar phases). */
+    private static final double[][] NONE = new double[0][];
+
+    /**
+     * The packed phased generators Φ_j∘G_k of step size h, straight from the packed generators: the off-diagonal
+     * pair (a, b) times e_a conj(e_b) with e_a = e^{i dc_a (c_j − 1/2) h}, the products of the planar route.
+     */
+    private void packedPhases(Slot s, double h, double[] nodes) {
+        int terms = sys.terms;
+        for (int j = 0; j < nodes.length; j++) {
+            double off = (nodes[j] - 0.5) * h;
+            for (int a = 0; a < 3; a++) {
+                double x = dc[a] * off;
+                er[a] = Math.cos(x);
+                ei[a] = Math.sin(x);
+            }
+            double f01r = er[0] * er[1] + ei[0] * ei[1], f01i = ei[0] * er[1] - er[0] * ei[1];
+            double f02r = er[0] * er[2] + ei[0] * ei[2], f02i = ei[0] * er[2] - er[0] * ei[2];
+            double f12r = er[1] * er[2] + ei[1] * ei[2], f12i = ei[1] * er[2] - er[1] * ei[2];
+            for (int k = 0; k < terms; k++) {
+                double[] g = packedGenerators[k], o = s.packed[j][k];
+                o[0] = g[0];
+                o[1] = g[1];
+                o[2] = g[2];
+                o[3] = g[3] * f01r - g[4] * f01i;
+                o[4] = g[3] * f01i + g[4] * f01r;
+                o[5] = g[5] * f02r - g[6] * f02i;
+                o[6] = g[5] * f02i + g[6] * f02r;
+                o[7] = g[7] * f12r - g[8] * f12i;
+                o[8] = g[7] * f12i + g[8] * f12r;
+            }
+        }
+        s.h = h;
+        s.nodes = nodes;
+        cur = s;
+    }
+
     /** Node matrices −iH_I(t + c_j h) from the coefficients coef[j] (after {@link #phases}; not on the table route). */
     void nodes(double[][] coef, int count) {
         int len = m * m;
@@ -254,6 +322,7 @@ final class InteractionFrame {
 
     /** out = Σ_j s·alpha_j N_j, the node matrices N_j = Σ_k coef[j][k] Φ_j∘G_k (after {@link #phases}). */
     void combination(double s, double[] alpha, double[][] coef, double[] outR, double[] outI) {
+        requirePlanar();
         if (table) {
             oneScale[0] = s;
             oneAlpha[0] = alpha;
@@ -295,6 +364,7 @@ final class InteractionFrame {
      */
     void combinations(int count, double[] scale, double[][] alpha, double[][] coef, double[][] outR,
                       double[][] outI) {
+        requirePlanar();
         if (!table) {
             for (int i = 0; i < count; i++) {
                 combination(scale[i], alpha[i], coef, outR[i], outI[i]);

@@ -71,6 +71,15 @@ public abstract class Kernel {
 
     /** @param allowPacked whether three-level Hamiltonian systems take the packed route (false: planar, for tests) */
     Kernel(LinearSystem sys, int nodes, boolean allowPacked) {
+        this(sys, nodes, allowPacked, false);
+    }
+
+    /**
+     * @param allowPacked       whether three-level Hamiltonian systems take the packed route
+     * @param packedCombination whether the subclass combines node values only through {@link #combinePacked} when
+     *                          packed (the interaction frame then keeps packed tables alone)
+     */
+    Kernel(LinearSystem sys, int nodes, boolean allowPacked, boolean packedCombination) {
         this.sys = sys;
         this.m = sys.m;
         int len = m * m;
@@ -86,7 +95,9 @@ public abstract class Kernel {
         si = new double[len];
         coef = Scratch.rows(Math.max(nodes, 1), sys.terms);
         w = new double[sys.terms];
-        frame = sys.isInteractionPicture() ? new InteractionFrame(sys, nodes) : null;
+        frame = sys.isInteractionPicture() ? new InteractionFrame(sys, nodes,
+                (long) Math.max(nodes, 1) * sys.terms * m * m <= InteractionFrame.TABLE_LIMIT,
+                packedCombination && allowPacked) : null;
         boolean change = frame != null && !frame.diagonal();
         fr1 = change ? new double[len] : null;
         fi1 = change ? new double[len] : null;

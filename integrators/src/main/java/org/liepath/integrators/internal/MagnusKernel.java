@@ -68,7 +68,7 @@ public final class MagnusKernel extends Kernel {
      *                    the planar route, for tests comparing the two)
      */
     MagnusKernel(LinearSystem sys, int order, boolean usePairs, boolean allowPacked) {
-        super(sys, order / 2, allowPacked);
+        super(sys, order / 2, allowPacked, true);
         if (order != 4 && order != 6 && order != 8) {
             throw new IllegalArgumentException("order " + order);
         }
