@@ -383,14 +383,50 @@ public final class Evolve {
                 return wrap(s, mode, n, r, () -> TighterRunError.reference(sys, spec, first));
             }
         } else {
-            Kernel k = adaptive && sys.isPiecewiseConstant() ? new PiecewiseKernel(sys) : s.kernel(sys);
+            Kernel k = adaptive && sys.isPiecewiseConstant() ? new PiecewiseKernel(sys) : reusedKernel(s, sys);
             r = Runner.run(k, spec);
+            release(s, k);
             if (!adaptive && r.outcome == Run.Outcome.SUCCESS) {
                 // made only if asked for, on a kernel of its own (the run's counters stay as they are)
                 return wrap(s, mode, n, r, () -> FixedStepError.estimate(s.kernel(sys), spec));
             }
         }
         return wrap(s, mode, n, r, null);
+    }
+
+    /**
+     * Systems up to this dimension reuse the kernel of their thread's previous run of the same scheme and system:
+     * for a few dozen steps of a three-level system, building a kernel (its scratch, the frame's tables and their
+     * node phases) was a tenth of the run. Larger kernels cost little against their steps and would hold more
+     * memory per thread.
+     */
+    static final int REUSE_MAX_DIM = 8;
+
+    /** The kernel released by the thread's last run and its scheme, or null. */
+    private static final ThreadLocal<Object[]> LAST_KERNEL = new ThreadLocal<>();
+
+    /**
+     * A kernel for a run: the thread's last one if it served the same scheme on the same system (taken, so that a
+     * nested run, say from inside a drive, builds its own), else a new one.
+     */
+    private static Kernel reusedKernel(Scheme s, LinearSystem sys) {
+        if (sys.dim() <= REUSE_MAX_DIM) {
+            Object[] last = LAST_KERNEL.get();
+            if (last != null && ((Kernel) last[1]).system() == sys && last[0].equals(s)) {
+                LAST_KERNEL.set(null);
+                Kernel k = (Kernel) last[1];
+                k.reset();
+                return k;
+            }
+        }
+        return s.kernel(sys);
+    }
+
+    /** Offers a finished run's kernel for the thread's next run (only after a normal return of the runner). */
+    private static void release(Scheme s, Kernel k) {
+        if (k.system().dim() <= REUSE_MAX_DIM && !(k instanceof PiecewiseKernel && s.kind != Scheme.Kind.PIECEWISE)) {
+            LAST_KERNEL.set(new Object[]{s, k});
+        }
     }
 
     private static Evolution wrap(Scheme s, Trajectory.Mode mode, int n, Run.Result r,

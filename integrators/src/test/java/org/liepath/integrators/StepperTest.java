@@ -3,6 +3,7 @@ package org.liepath.integrators;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.liepath.core.Drive;
 import org.liepath.core.Hamiltonian;
 import org.liepath.core.InvalidInputException;
 import org.liepath.core.Lindbladian;
@@ -108,6 +109,36 @@ class StepperTest {
         for (int k = 0; k < 20_000; k++) {
             st.advance(1e-3 * k, 1e-3, u);
             st.advance(1e-3 * k, 1e-3, v);
+        }
+        long tid = Thread.currentThread().getId();
+        long before = bean.getThreadAllocatedBytes(tid);
+        for (int k = 0; k < 10_000; k++) {
+            st.advance(1e-3 * k, 1e-3, u);
+        }
+        long after = bean.getThreadAllocatedBytes(tid);
+        assertTrue(after - before < 1024, (after - before) + " bytes allocated by 10 000 steps of " + s.name());
+        assertTrue(Double.isFinite(u[0]));
+    }
+
+    /**
+     * Three levels take the packed route (packed exponents, packed frame tables, workspaces created on first use):
+     * after warm-up it allocates nothing per step either, in both pictures.
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("schemes")
+    void advanceDoesNotAllocateOnThreeLevels(Scheme s) {
+        com.sun.management.ThreadMXBean bean = (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
+        Operator x01 = Operator.unit(3, 0, 1).plus(Operator.unit(3, 1, 0));
+        Operator x12 = Operator.unit(3, 1, 2).plus(Operator.unit(3, 2, 1));
+        Hamiltonian h = Hamiltonian.builder(3).term(1.0, Operator.diagonal(0, 1, 2.3))
+                .term(x01, Drive.cosine(0.3, 1.1)).term(x12, Drive.sine(0.2, 0.7, 0)).build();
+        Stepper st = s.stepper(h);
+        double[] u = new double[18];
+        u[0] = 1;
+        u[4] = 1;
+        u[8] = 1;
+        for (int k = 0; k < 20_000; k++) {
+            st.advance(1e-3 * k, 1e-3, u);
         }
         long tid = Thread.currentThread().getId();
         long before = bean.getThreadAllocatedBytes(tid);

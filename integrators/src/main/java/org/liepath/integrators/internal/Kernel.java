@@ -65,6 +65,23 @@ public abstract class Kernel {
     /** Steps taken by {@link #advance} (one per piece between breakpoints). */
     public long steps;
 
+    /**
+     * Readies the kernel for another run: the counters restart from zero. Everything else a run reads is either
+     * written by the run before it is read (scratch, the frame's origin) or depends on the system and step size
+     * alone (the frame's cached node phases), so a reused kernel computes bit for bit what a new one would.
+     */
+    public final void reset() {
+        evaluations = 0;
+        exponentials = 0;
+        commutators = 0;
+        steps = 0;
+    }
+
+    /** @return the system this kernel steps */
+    public final LinearSystem system() {
+        return sys;
+    }
+
     protected Kernel(LinearSystem sys, int nodes) {
         this(sys, nodes, true);
     }
