@@ -28,8 +28,12 @@ import java.util.List;
  *
  * <p>Solves dU/dt = −iH(t)U, U(t0) = I (ħ = 1) for a {@link Hamiltonian}, or dρ/dt = L(t)[ρ] for a
  * {@link Lindbladian} in Liouville space (column stacking). Every call returns a new immutable configuration, so a
- * configuration can be shared between threads and reused; {@link #run()} does the work and allocates its own
- * workspace, so many threads may run the same configuration at once with identical results.
+ * configuration can be shared between threads and reused; {@link #run()} does the work in a workspace of its own
+ * thread, so many threads may run the same configuration at once with identical results. Repeated runs are cheaper
+ * than the first: the prepared form of the last Hamiltonian run is shared by all threads (it is immutable), and for
+ * systems of up to 8 levels (Liouville dimension for a Lindbladian) each thread keeps the workspace of its last
+ * run for the next run of the same scheme and generator (so it holds a reference to that generator until another
+ * run replaces it). A reused workspace gives bit for bit the result of a new one.
  *
  * <p><b>Defaults</b> when a run names neither: scheme {@link Scheme#commutatorFree4Opt()}, adaptive steps with
  * tolerance {@value #DEFAULT_TOLERANCE}, at most {@value #DEFAULT_MAX_STEPS} steps. {@link #tolerance} and
@@ -395,7 +399,8 @@ public final class Evolve {
     }
 
     /**
-     * Systems up to this dimension reuse the kernel of their thread's previous run of the same scheme and system:
+     * Systems up to this dimension (in Liouville space for a Lindbladian) reuse the workspace of their thread's
+     * previous run of the same scheme and system:
      * for a few dozen steps of a three-level system, building a kernel (its scratch, the frame's tables and their
      * node phases) was a tenth of the run. Larger kernels cost little against their steps and would hold more
      * memory per thread.

@@ -4,6 +4,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.liepath.core.Drive;
 import org.liepath.core.Hamiltonian;
+import org.liepath.core.Lindbladian;
 import org.liepath.core.Operator;
 
 import java.util.List;
@@ -50,6 +51,25 @@ class KernelReuseTest {
             assertSameRun(fixed, Evolve.of(h).over(0, 2).scheme(s).steps(17).run(), s.name() + " fixed");
             assertSameRun(adaptive, Evolve.of(h).over(0, 2).scheme(s).tolerance(1e-9).run(), s.name() + " adaptive");
             assertSameRun(other, Evolve.of(h).over(0, 2).scheme(s).steps(5).run(), s.name() + " 5 steps");
+        }
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("schemes")
+    void repeatedOpenSystemRunsEqualTheFirstBitForBit(Scheme s) {
+        if (s.isInteractionPicture()) {
+            return; // Lindbladians are refused in the interaction picture (tested elsewhere)
+        }
+        // a decaying driven qubit: Liouville dimension 4, within the reuse bound
+        Operator x = Operator.unit(2, 0, 1).plus(Operator.unit(2, 1, 0));
+        Hamiltonian h = Hamiltonian.builder(2).term(1.0, Operator.diagonal(0, 1)).term(x, Drive.cosine(0.3, 1.1)).build();
+        Lindbladian l = Lindbladian.builder(h).jump(0.2, Operator.unit(2, 0, 1)).build();
+        Evolution first = Evolve.of(l).over(0, 2).scheme(s).steps(13).run();
+        for (int k = 0; k < 2; k++) {
+            Evolution again = Evolve.of(l).over(0, 2).scheme(s).steps(13).run();
+            assertArrayEquals(first.channel().matrix().reArray(), again.channel().matrix().reArray(), 0.0, s.name());
+            assertArrayEquals(first.channel().matrix().imArray(), again.channel().matrix().imArray(), 0.0, s.name());
+            assertEquals(first.stats().exponentials(), again.stats().exponentials(), s.name());
         }
     }
 

@@ -106,25 +106,32 @@ public final class LinearSystem {
      * it with its time.
      */
     public static LinearSystem of(Hamiltonian h) {
-        Cached c = lastPlain;
-        if (c != null && c.hamiltonian == h) {
-            return c.system;
-        }
-        LinearSystem sys = build(h);
-        lastPlain = new Cached(h, sys);
-        return sys;
+        return PLAIN.get(h, LinearSystem::build);
     }
 
     /**
-     * The systems of the last Hamiltonian seen, one per picture: a Hamiltonian is immutable and so is a system
-     * (nothing writes into its arrays after construction, and its coefficient source is the Hamiltonian's own), so
-     * the runs of one Hamiltonian, in any thread, share it instead of rebuilding it per run (on a three-level
-     * system building it took about a fifth of a one-step run). Identity, not equality, keys the entry.
+     * The system of the last generator seen: Hamiltonians and Lindbladians are immutable and so is a system (nothing
+     * writes into its arrays after construction, and its coefficient source is the generator's own), so the runs of
+     * one generator, in any thread, share it instead of rebuilding it per run (on a three-level system building it
+     * took about a fifth of a one-step run). Identity, not equality, keys the entry; one entry per kind of system.
      */
-    private record Cached(Hamiltonian hamiltonian, LinearSystem system) {
+    private static final class LastSeen<K> {
+        /** {key, system}, replaced whole so that readers never see a key with another key's system. */
+        private volatile Object[] entry;
+
+        LinearSystem get(K key, java.util.function.Function<K, LinearSystem> build) {
+            Object[] e = entry;
+            if (e != null && e[0] == key) {
+                return (LinearSystem) e[1];
+            }
+            LinearSystem sys = build.apply(key);
+            entry = new Object[]{key, sys};
+            return sys;
+        }
     }
 
-    private static volatile Cached lastPlain, lastFrame;
+    private static final LastSeen<Hamiltonian> PLAIN = new LastSeen<>(), FRAME = new LastSeen<>();
+    private static final LastSeen<Lindbladian> OPEN = new LastSeen<>();
 
     private static LinearSystem build(Hamiltonian h) {
         int n = h.dim(), L = h.size(), len = n * n;
@@ -184,13 +191,7 @@ public final class LinearSystem {
      * Schrödinger-picture system is returned (the frame would be the identity).
      */
     public static LinearSystem interaction(Hamiltonian h) {
-        Cached c = lastFrame;
-        if (c != null && c.hamiltonian == h) {
-            return c.system;
-        }
-        LinearSystem sys = buildInteraction(h);
-        lastFrame = new Cached(h, sys);
-        return sys;
+        return FRAME.get(h, LinearSystem::buildInteraction);
     }
 
     private static LinearSystem buildInteraction(Hamiltonian h) {
@@ -341,6 +342,10 @@ public final class LinearSystem {
 
     /** v' = S(t) v in Liouville space (column stacking), S(t) = Σ c_k(t)(−i(I⊗A_k − A_kᵀ⊗I)) + dissipator. */
     public static LinearSystem of(Lindbladian l) {
+        return OPEN.get(l, LinearSystem::build);
+    }
+
+    private static LinearSystem build(Lindbladian l) {
         Hamiltonian h = l.hamiltonian();
         int L = h.size();
         double[][] gr = new double[L][], gi = new double[L][];
