@@ -200,16 +200,21 @@ public final class Scheme {
      * accuracy. With the drives resonant with a two-level H_0 the exactly solvable rotating-drive problem becomes
      * time independent in this frame and a single step is exact.
      *
-     * <p>Cost beyond this scheme: O(m²) per step for the frame's phases when H_0 is diagonal in the Hamiltonian's
-     * basis; otherwise H_0 is diagonalised once per run or stepper and every step pays two more m×m products (m×1 for
-     * a state) for the basis change. A Hamiltonian without a constant-drive term has nothing to rotate away: the
-     * steps are then this scheme's own.
+     * <p>Cost beyond this scheme: O(m²) per step for the frame's phases (m sines and cosines, the node phases cached
+     * per step size). When H_0 is not diagonal in the Hamiltonian's basis it is diagonalised once per run or stepper,
+     * and the state crosses into the frame once per run and out of it once per sample (one m×m product each, m×1 for
+     * a state). A Hamiltonian without a constant-drive term has nothing to rotate away: the steps are then this
+     * scheme's own.
      *
      * <p>Available for the single-exponential schemes: {@link #exponentialMidpoint()} (which then becomes the
-     * symmetric splitting e^{−iH_0h/2} e^{−ihH_1(τ)} e^{−iH_0h/2}) and the Magnus schemes; not for the
-     * commutator-free products of several exponentials, exact piecewise-constant stepping, the reference integrator
-     * or Wei–Norman coordinates, and only for Hamiltonians (an evolution or stepper of a {@link Lindbladian} with such
-     * a scheme is refused).
+     * symmetric splitting e^{−iH_0h/2} e^{−ihH_1(τ)} e^{−iH_0h/2}) and the Magnus schemes. Not for the
+     * commutator-free products of several exponentials: they would run (every factor's exponent takes the same
+     * diagonal conjugation; measured orders 4 and 6), but their error in the frame was 2–5× larger at equal steps on
+     * a driven three-level system and 5–75× larger on a 16-level system with a strong static part than without the
+     * frame, because the node values they do not couple by commutators rotate at the frame's frequencies; refusing
+     * them keeps the frame an improvement wherever it is offered. Not either for exact piecewise-constant stepping,
+     * the reference integrator or Wei–Norman coordinates, and only for Hamiltonians (an evolution or stepper of a
+     * {@link Lindbladian} with such a scheme is refused).
      *
      * @return the scheme in the interaction picture (this scheme if it already is)
      * @throws InvalidInputException UNSUPPORTED for the schemes named above

@@ -14,7 +14,7 @@ public final class CommutatorFreeKernel extends Kernel {
     public CommutatorFreeKernel(LinearSystem sys, double[] nodes, double[][] table, int order) {
         super(sys, nodes.length);
         if (inFrame() && table.length > 1) {
-            // the frame's half-step phases enclose one exponential (InteractionFrame)
+            // refused by Scheme.inInteractionPicture for accuracy, not correctness (see its Javadoc)
             throw new IllegalArgumentException("table: one exponential in the interaction picture, got "
                     + table.length);
         }
