@@ -71,8 +71,6 @@ final class InteractionFrame {
     private final double[][] scratchR, scratchI;
     /** Packed node matrices of the current step (three levels on the table route), else null. */
     private final double[][] packedNodes;
-    /** The packed generators (three levels on the table route), else null. */
-    private final double[][] packedGenerators;
     /** The packed positions any generator occupies (the union of {@link #packedNz}). */
     private final int[] packedUsed;
 
@@ -141,12 +139,10 @@ final class InteractionFrame {
         boolean packed = m == 3 && sys.skewHermitian;
         packedNz = packed && table ? new int[terms][] : null;
         double[] union = new double[Skew3.LEN];
-        packedGenerators = packedNz != null ? Scratch.rows(terms, Skew3.LEN) : null;
         if (packedNz != null) {
             double[] g = new double[Skew3.LEN];
             for (int k = 0; k < terms; k++) {
-                Skew3.pack(sys.gr[k], sys.gi[k], g);
-                System.arraycopy(g, 0, packedGenerators[k], 0, Skew3.LEN);
+                System.arraycopy(sys.packed[k], 0, g, 0, Skew3.LEN);
                 // the phases mix real and imaginary parts of an off-diagonal entry: both are kept if either is set
                 for (int q = 3; q < Skew3.LEN; q += 2) {
                     if (g[q] != 0.0 || g[q + 1] != 0.0) {
@@ -154,13 +150,13 @@ final class InteractionFrame {
                         g[q + 1] = 1.0;
                     }
                 }
-                packedNz[k] = Kernel.nonzeros(g);
+                packedNz[k] = LinearSystem.nonzeros(g, Skew3.LEN);
                 for (int q = 0; q < Skew3.LEN; q++) {
                     union[q] = union[q] != 0.0 || g[q] != 0.0 ? 1.0 : 0.0;
                 }
             }
         }
-        packedUsed = packedNz != null ? Kernel.nonzeros(union) : null;
+        packedUsed = packedNz != null ? LinearSystem.nonzeros(union, Skew3.LEN) : null;
         packedNodes = packedNz != null ? Scratch.rows(count, Skew3.LEN) : null;
         scratchR = packed && !table ? Scratch.rows(4, len) : null;
         scratchI = packed && !table ? Scratch.rows(4, len) : null;
@@ -289,7 +285,7 @@ final class InteractionFrame {
             double f02r = er[0] * er[2] + ei[0] * ei[2], f02i = ei[0] * er[2] - er[0] * ei[2];
             double f12r = er[1] * er[2] + ei[1] * ei[2], f12i = ei[1] * er[2] - er[1] * ei[2];
             for (int k = 0; k < terms; k++) {
-                double[] g = packedGenerators[k], o = s.packed[j][k];
+                double[] g = sys.packed[k], o = s.packed[j][k];
                 o[0] = g[0];
                 o[1] = g[1];
                 o[2] = g[2];

@@ -52,10 +52,6 @@ public abstract class Kernel {
      * exponentiated on the nine reals that fix a 3×3 anti-Hermitian matrix.
      */
     protected final Skew3 skew3;
-    /** Packed generators (driven terms) and constant part (null if none), their nonzero positions; three levels. */
-    private final double[][] packedG;
-    private final double[] packedG0;
-    private final int[][] packedNz;
     /** Scratch for a packed exponent taken from planar arrays, and for its planar copy on the eigen route. */
     private final double[] packedW, unpackedR, unpackedI;
 
@@ -123,37 +119,6 @@ public abstract class Kernel {
         packedW = packed ? new double[Skew3.LEN] : null;
         unpackedR = packed ? new double[len] : null;
         unpackedI = packed ? new double[len] : null;
-        packedG = packed ? Scratch.rows(sys.terms, Skew3.LEN) : null;
-        packedNz = packed ? new int[sys.terms][] : null;
-        if (packed) {
-            for (int k = 0; k < sys.terms; k++) {
-                Skew3.pack(sys.gr[k], sys.gi[k], packedG[k]);
-                packedNz[k] = nonzeros(packedG[k]);
-            }
-            if (sys.g0r != null) {
-                packedG0 = new double[Skew3.LEN];
-                Skew3.pack(sys.g0r, sys.g0i, packedG0);
-            } else {
-                packedG0 = null;
-            }
-        } else {
-            packedG0 = null;
-        }
-    }
-
-    /** @return the positions of the nonzero entries of a packed matrix */
-    static int[] nonzeros(double[] x) {
-        int c = 0;
-        for (double v : x) {
-            c += v != 0.0 ? 1 : 0;
-        }
-        int[] idx = new int[c];
-        for (int q = 0, i = 0; q < x.length; q++) {
-            if (x[q] != 0.0) {
-                idx[i++] = q;
-            }
-        }
-        return idx;
     }
 
     private void skewScratch() {
@@ -201,13 +166,15 @@ public abstract class Kernel {
         for (int i = 0; i < count; i++) {
             double[] o = out[i];
             double w0 = nodeWeights(scale[i], alpha[i], w);
-            if (packedG0 != null) {
+            if (sys.packed0 != null) {
                 for (int q = 0; q < Skew3.LEN; q++) {
-                    o[q] = w0 * packedG0[q];
+                    o[q] = w0 * sys.packed0[q];
                 }
             } else {
                 Arrays.fill(o, 0.0);
             }
+            double[][] packedG = sys.packed;
+            int[][] packedNz = sys.packedNz;
             for (int k = 0; k < packedG.length; k++) {
                 double c = w[k];
                 if (c == 0.0) {

@@ -1,5 +1,7 @@
 package org.liepath.integrators.internal;
 
+import org.liepath.core.internal.Skew3;
+
 import org.liepath.core.Hamiltonian;
 import org.liepath.core.Lindbladian;
 import org.liepath.core.Operator;
@@ -62,6 +64,22 @@ public final class LinearSystem {
         this.piecewiseConstant = piecewiseConstant;
         this.skewHermitian = skewHermitian;
         int n = generators(), len = m * m;
+        if (m == 3 && skewHermitian) {
+            packed = Scratch.rows(terms, Skew3.LEN);
+            packedNz = new int[terms][];
+            for (int k = 0; k < terms; k++) {
+                Skew3.pack(gr[k], gi[k], packed[k]);
+                packedNz[k] = nonzeros(packed[k], Skew3.LEN);
+            }
+            packed0 = g0r == null ? null : new double[Skew3.LEN];
+            if (packed0 != null) {
+                Skew3.pack(g0r, g0i, packed0);
+            }
+        } else {
+            packed = null;
+            packedNz = null;
+            packed0 = null;
+        }
         spRe = new int[n][];
         spIm = new int[n][];
         for (int k = 0; k < n; k++) {
@@ -81,7 +99,16 @@ public final class LinearSystem {
      */
     private final int[][] spRe, spIm;
 
-    private static int[] nonzeros(double[] x, int len) {
+    /**
+     * Three-level Hamiltonian systems: the driven generators and G_0 (null if none) packed ({@link Skew3}), with
+     * the nonzero positions of each packed generator; null for every other system.
+     */
+    final double[][] packed;
+    final double[] packed0;
+    final int[][] packedNz;
+
+    /** @return the positions of the nonzero entries among the first len of x */
+    static int[] nonzeros(double[] x, int len) {
         int count = 0;
         for (int q = 0; q < len; q++) {
             if (x[q] != 0.0) {
