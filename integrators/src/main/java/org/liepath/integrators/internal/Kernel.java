@@ -12,8 +12,11 @@ import java.util.Arrays;
  * One step of an exponential scheme for X' = A(t) X on a state X of m rows and p columns (p = m for a propagator,
  * p = 1 for a vector), planar row-major. Subclasses hold every scratch array, so steps allocate nothing.
  *
- * <p>Mutable and not thread-safe: one kernel per run or per stepper. The counters record work done since
- * construction. Every step evaluates all coefficients before it touches the state, so a drive failure (which
+ * <p>Three-level Hamiltonian systems take a packed route ({@link Skew3}): every exponent is exponentiated on its
+ * nine reals, and kernels that form their exponents packed ({@link MagnusKernel}) combine node values packed too.
+ *
+ * <p>Mutable and not thread-safe: one kernel per run or per stepper (a run may take over the kernel of its thread's
+ * previous run, see {@link #reset}). The counters record work done since construction or the last reset. Every step evaluates all coefficients before it touches the state, so a drive failure (which
  * propagates as an exception) leaves the state unchanged.
  */
 public abstract class Kernel {
@@ -33,7 +36,7 @@ public abstract class Kernel {
     private final double[] vr, vi;
     /** Scratch: exponent and exponential (m×m). */
     protected final double[] wr, wi, er, ei;
-    /** Scratch state (m×m) for products and for trial steps. */
+    /** Scratch state (m×m) for products. */
     protected final double[] sr, si;
     /** Scratch of {@link #trial}, created on first use (fixed-step runs never need it). */
     private double[] yr2, yi2;
