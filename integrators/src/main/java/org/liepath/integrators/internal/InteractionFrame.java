@@ -61,14 +61,15 @@ final class InteractionFrame {
         double[][] phr, phi;
         /** Phased generators Φ_j∘G_k on the table route: [node][term][m²]. */
         double[][][] tr, ti;
-        /** The same, packed ({@link Skew3}; three-level Hamiltonian systems on the table route, else null). */
+        /** The same, packed ({@link Skew3}; packed-only frames, which have no planar tables), else null. */
         double[][][] packed;
     }
 
-    /** Nonzero positions of each packed generator (three levels on the table route), else null. */
+    /** Nonzero positions of each packed phased generator (real and imaginary part of a pair together; packed-only
+     * frames), else null. */
     private final int[][] packedNz;
-    /** Planar scratch for packed combinations off the table route. */
-    private final double[][] scratchR, scratchI;
+    /** Planar scratch for packed combinations of a frame that is not packed-only (created on first use). */
+    private double[][] scratchR, scratchI;
     /** Packed node matrices of the current step (three levels on the table route), else null. */
     private final double[][] packedNodes;
     /** The packed positions any generator occupies (the union of {@link #packedNz}). */
@@ -136,8 +137,7 @@ final class InteractionFrame {
                 }
             }
         }
-        boolean packed = m == 3 && sys.skewHermitian;
-        packedNz = packed && table ? new int[terms][] : null;
+        packedNz = this.packedOnly ? new int[terms][] : null;
         double[] union = new double[Skew3.LEN];
         if (packedNz != null) {
             double[] g = new double[Skew3.LEN];
@@ -158,8 +158,6 @@ final class InteractionFrame {
         }
         packedUsed = packedNz != null ? LinearSystem.nonzeros(union, Skew3.LEN) : null;
         packedNodes = packedNz != null ? Scratch.rows(count, Skew3.LEN) : null;
-        scratchR = packed && !table ? Scratch.rows(4, len) : null;
-        scratchI = packed && !table ? Scratch.rows(4, len) : null;
         slotNodes = count;
         er = new double[m];
         ei = new double[m];
@@ -184,7 +182,6 @@ final class InteractionFrame {
         if (table) {
             s.tr = Scratch.rows(count, terms, len);
             s.ti = Scratch.rows(count, terms, len);
-            s.packed = packedNz != null ? Scratch.rows(count, terms, Skew3.LEN) : null;
         }
         s.phr = Scratch.rows(count, len);
         s.phi = Scratch.rows(count, len);
@@ -247,9 +244,6 @@ final class InteractionFrame {
                         double a = gr[q], b = gi[q], c = fr[q], e = fi[q];
                         or[q] = a * c - b * e;
                         oi[q] = a * e + b * c;
-                    }
-                    if (s.packed != null) {
-                        Skew3.pack(or, oi, s.packed[j][k]);
                     }
                 }
             }
@@ -418,11 +412,15 @@ final class InteractionFrame {
 
     /**
      * out_i = Σ_j scale_i·alpha_i[j] N_j packed ({@link Skew3}), for i &lt; count ≤ 4: {@link #combinations} for
-     * three-level Hamiltonian systems, scattering the nonzeros of the packed phased generators (off the table
-     * route, the planar combinations packed).
+     * three-level Hamiltonian systems, scattering the nonzeros of the packed phased generators (a frame that is not
+     * packed-only packs its planar combinations).
      */
     void combinationsPacked(int count, double[] scale, double[][] alpha, double[][] coef, double[][] out) {
-        if (packedNz == null) {
+        if (!packedOnly) {
+            if (scratchR == null) {
+                scratchR = Scratch.rows(4, m * m);
+                scratchI = Scratch.rows(4, m * m);
+            }
             combinations(count, scale, alpha, coef, scratchR, scratchI);
             for (int i = 0; i < count; i++) {
                 Skew3.pack(scratchR[i], scratchI[i], out[i]);

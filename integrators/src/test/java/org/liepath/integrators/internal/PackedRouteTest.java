@@ -95,6 +95,37 @@ class PackedRouteTest {
         assertTrue(unitarity(u) <= 1e-13, "unitarity " + unitarity(u));
     }
 
+    @ParameterizedTest(name = "seed {0}")
+    @MethodSource("org.liepath.testing.Seeds#fewCases")
+    void packedAndPlanarFramesCombineTheSameNodeValues(long seed) {
+        // a packed-only frame (its own packed tables) against a planar frame whose combinations are packed after
+        Random r = new Random(seed);
+        LinearSystem sys = LinearSystem.interaction(random(r, 2, 1.0));
+        InteractionFrame packedOnly = new InteractionFrame(sys, 4, true, true);
+        InteractionFrame planar = new InteractionFrame(sys, 4, true, false);
+        double h = 0.1 + r.nextDouble();
+        packedOnly.phases(h, Tables.GAUSS4);
+        planar.phases(h, Tables.GAUSS4);
+        double[][] coef = new double[4][sys.terms];
+        for (double[] c : coef) {
+            for (int k = 0; k < c.length; k++) {
+                c[k] = r.nextGaussian();
+            }
+        }
+        double[] scale = {1.0, -0.5, 2.0};
+        double[][] alpha = {{0.1, 0.2, 0.3, 0.4}, {1, -1, 1, -1}, {0, 1, 0, 0}};
+        double[][] a = new double[3][9], b = new double[3][9];
+        packedOnly.combinationsPacked(3, scale, alpha, coef, a);
+        planar.combinationsPacked(3, scale, alpha, coef, b);
+        for (int i = 0; i < 3; i++) {
+            for (int q = 0; q < 9; q++) {
+                // the same sums in another grouping: Σ|terms| ≤ |scale|·Σ|α|·Σ|c|·max|G| ≲ 100 here, and each
+                // grouping rounds to at most ~20 u of it
+                assertEquals(b[i][q], a[i][q], 2000 * U, "output " + i + " entry " + q);
+            }
+        }
+    }
+
     private static double[][] state(Random r, int p) {
         double[][] x = new double[2][3 * p];
         if (p == 3) {
