@@ -91,6 +91,21 @@ class Skew3Test {
     }
 
     @ParameterizedTest(name = "seed {0}")
+    @MethodSource("org.liepath.testing.Seeds#fewCases")
+    void bracketOfACombinationIsTheBracketOfTheFormedCombination(long seed) {
+        // s·[a·x + b·y, z] formed in registers equals the bracket of the stored combination bit for bit: the same
+        // products and sums in the same order
+        Random r = new Random(seed);
+        double[] x = packed(r, 1.0), y = packed(r, 1.0), z = packed(r, 1.0), xy = new double[9];
+        double a = r.nextGaussian(), b = r.nextGaussian(), s = r.nextGaussian();
+        Skew3.lin(a, x, b, y, xy);
+        double[] want = new double[9], got = new double[9];
+        Skew3.bracket(s, xy, z, want);
+        Skew3.bracket(s, a, x, b, y, z, got);
+        assertArrayEquals(want, got, 0.0);
+    }
+
+    @ParameterizedTest(name = "seed {0}")
     @MethodSource("org.liepath.testing.Seeds#cases")
     void structuredProductsAreThePlanarProducts(long seed) {
         Random r = new Random(seed);
