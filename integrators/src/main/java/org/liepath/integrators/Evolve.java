@@ -400,10 +400,9 @@ public final class Evolve {
 
     /**
      * Systems up to this dimension (in Liouville space for a Lindbladian) reuse the workspace of their thread's
-     * previous run of the same scheme and system:
-     * for a few dozen steps of a three-level system, building a kernel (its scratch, the frame's tables and their
-     * node phases) was a tenth of the run. Larger kernels cost little against their steps and would hold more
-     * memory per thread.
+     * previous run of the same scheme and system: for a few dozen steps of a three-level system, building a kernel
+     * (its scratch, the frame's tables and their node phases) was a tenth of the run. Larger kernels cost little
+     * against their steps and would hold more memory per thread.
      */
     static final int REUSE_MAX_DIM = 8;
 
