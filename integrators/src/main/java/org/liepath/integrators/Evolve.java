@@ -30,7 +30,8 @@ import java.util.List;
  * {@link Lindbladian} in Liouville space (column stacking). Every call returns a new immutable configuration, so a
  * configuration can be shared between threads and reused; {@link #run()} does the work in a workspace of its own
  * thread, so many threads may run the same configuration at once with identical results. Repeated runs are cheaper
- * than the first: the prepared form of the last Hamiltonian run is shared by all threads (it is immutable), and for
+ * than the first: the prepared form of the last generator run (up to 64 levels, in Liouville space for a
+ * Lindbladian) is shared by all threads (it is immutable), and for
  * systems of up to 8 levels (Liouville dimension for a Lindbladian) each thread keeps the workspace of its last
  * run for the next run of the same scheme and generator (so it holds a reference to that generator until another
  * run replaces it). A reused workspace gives bit for bit the result of a new one.

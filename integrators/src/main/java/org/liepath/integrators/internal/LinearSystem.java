@@ -152,10 +152,19 @@ public final class LinearSystem {
                 return (LinearSystem) e[1];
             }
             LinearSystem sys = build.apply(key);
-            entry = new Object[]{key, sys};
+            if (sys.m <= SHARE_MAX_DIM) {
+                entry = new Object[]{key, sys};
+            }
             return sys;
         }
     }
+
+    /**
+     * Largest dimension whose system is kept for sharing: building a larger one costs little against its run, and
+     * keeping it (a Liouville-space system of a few dozen levels holds hundreds of megabytes) would hold memory the
+     * caller has let go of.
+     */
+    static final int SHARE_MAX_DIM = 64;
 
     private static final LastSeen<Hamiltonian> PLAIN = new LastSeen<>(), FRAME = new LastSeen<>();
     private static final LastSeen<Lindbladian> OPEN = new LastSeen<>();

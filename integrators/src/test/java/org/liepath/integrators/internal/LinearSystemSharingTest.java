@@ -13,6 +13,7 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertNotSame;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /** The systems of the last Hamiltonian are shared between runs; sharing never mixes up two Hamiltonians. */
 class LinearSystemSharingTest {
@@ -29,6 +30,16 @@ class LinearSystemSharingTest {
         // equal but distinct Hamiltonians are keyed by identity: no equality test per run
         assertNotSame(LinearSystem.of(a), LinearSystem.of(b));
         assertNotSame(LinearSystem.of(a), LinearSystem.interaction(a));
+    }
+
+    @Test
+    void largeSystemsAreNotKept() {
+        // a Liouville-space system beyond SHARE_MAX_DIM is rebuilt per run rather than held
+        Operator z = Operator.diagonal(java.util.stream.IntStream.range(0, 9).mapToDouble(i -> i).toArray());
+        org.liepath.core.Lindbladian l = org.liepath.core.Lindbladian.builder(Hamiltonian.builder(9).term(1.0, z).build())
+                .jump(0.1, Operator.unit(9, 0, 1)).build();
+        assertTrue(LinearSystem.of(l).dim() > LinearSystem.SHARE_MAX_DIM);
+        assertNotSame(LinearSystem.of(l), LinearSystem.of(l));
     }
 
     @Test
