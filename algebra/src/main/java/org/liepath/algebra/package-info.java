@@ -9,7 +9,7 @@
  *   <li>{@link org.liepath.algebra.Controllability} — the Lie-algebra rank condition: is the system fully
  *       controllable (the algebra is su(N) or u(N))?</li>
  *   <li>{@link org.liepath.algebra.Subalgebras} — closed subsets of monomial bases such as Pauli strings;</li>
- *   <li>{@link org.liepath.algebra.PauliString}, {@link org.liepath.algebra.PauliSum},
+ *   <li>{@link org.liepath.algebra.PauliString}, {@link org.liepath.algebra.PauliCombination},
  *       {@link org.liepath.algebra.PauliAlgebra} — exact closure over Pauli strings for many qubits, without dense
  *       matrices.</li>
  * </ul>

@@ -88,12 +88,12 @@ class AlgebraHardeningTest {
 
     @Test
     void pauliClosureIsIdenticalAcrossThreadsAndRuns() throws Exception {
-        List<PauliSum> perTerm = SpinChains.isingPerTerm(8);
-        List<PauliSum> summed = SpinChains.isingSummed(6, true);
-        for (List<PauliSum> gens : List.of(perTerm, summed)) {
+        List<PauliCombination> perTerm = SpinChains.isingPerTerm(8);
+        List<PauliCombination> summed = SpinChains.isingSummed(6, true);
+        for (List<PauliCombination> gens : List.of(perTerm, summed)) {
             PauliAlgebra seq = PauliAlgebra.generatedBy(gens);
             PauliAlgebra again = PauliAlgebra.generatedBy(gens);
-            // PauliSum.equals compares strings and bit-identical coefficients, in order of the basis list
+            // PauliCombination.equals compares strings and bit-identical coefficients, in order of the basis list
             assertEquals(seq.basis(), again.basis(), "second sequential run");
             assertEquals(seq.type(), again.type());
             for (PauliAlgebra a : concurrently(() -> PauliAlgebra.generatedBy(gens))) {
@@ -121,7 +121,7 @@ class AlgebraHardeningTest {
 
     @Test
     void aListenerThatThrowsLateDoesNotChangeAPauliClosure() {
-        List<PauliSum> gens = SpinChains.isingPerTerm(12);
+        List<PauliCombination> gens = SpinChains.isingPerTerm(12);
         PauliAlgebra clean = PauliAlgebra.generatedBy(gens);
         AtomicInteger calls = new AtomicInteger();
         PauliAlgebra withBug = PauliAlgebra.generatedBy(gens, PauliAlgebra.DEFAULT_MAX_DIMENSION, (f, c) -> {
@@ -153,7 +153,7 @@ class AlgebraHardeningTest {
     @Test
     void cancellingALargePauliClosureIsPrompt() {
         // the per-term Ising chain on 40 qubits closes to so(80) (3160 strings): cancel early
-        List<PauliSum> gens = SpinChains.isingPerTerm(40);
+        List<PauliCombination> gens = SpinChains.isingPerTerm(40);
         assertTimeoutPreemptively(Duration.ofSeconds(20), () -> assertThrows(CancellationException.class,
                 () -> PauliAlgebra.generatedBy(gens, PauliAlgebra.DEFAULT_MAX_DIMENSION, (f, c) -> c < 50)));
     }
@@ -163,8 +163,8 @@ class AlgebraHardeningTest {
     /** Parses or refuses; a parsed sum must print and parse back to itself. */
     static void parseOrRefuse(String text) {
         try {
-            PauliSum s = PauliSum.parse(text);
-            assertEquals(s, PauliSum.parse(s.toString()), text);
+            PauliCombination s = PauliCombination.parse(text);
+            assertEquals(s, PauliCombination.parse(s.toString()), text);
         } catch (InvalidInputException e) {
             assertNotNull(e.reason());
             assertNotNull(e.getMessage());
@@ -235,12 +235,12 @@ class AlgebraHardeningTest {
     @Test
     void hugeAndNonFiniteCoefficientsAreRefusedWithTheValueSeen() {
         for (String c : List.of("1e309", "-1e999", "1e2147483648")) {
-            InvalidInputException e = assertThrows(InvalidInputException.class, () -> PauliSum.parse(c + " XY"));
+            InvalidInputException e = assertThrows(InvalidInputException.class, () -> PauliCombination.parse(c + " XY"));
             assertEquals(InvalidInputException.Reason.NOT_FINITE, e.reason(), e.getMessage());
             assertTrue(e.getMessage().startsWith("text"), e.getMessage());
         }
         // a coefficient that underflows to zero is a legal (zero) term, not an error
-        assertTrue(PauliSum.parse("1e-400 XY").isZero());
+        assertTrue(PauliCombination.parse("1e-400 XY").isZero());
     }
 
     @Test
@@ -252,7 +252,7 @@ class AlgebraHardeningTest {
             for (int k = 0; k < 20_000; k++) {
                 many.append(k == 0 ? "" : " + ").append(k % 7).append(' ').append("XYZ".charAt(k % 3)).append("IZ");
             }
-            assertEquals(3, PauliSum.parse(many.toString()).qubits());
+            assertEquals(3, PauliCombination.parse(many.toString()).qubits());
             parseOrRefuse("+".repeat(100_000));
             parseOrRefuse("1".repeat(100_000) + " X");
             parseOrRefuse("(".repeat(100_000));

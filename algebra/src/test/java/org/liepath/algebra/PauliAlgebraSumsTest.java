@@ -25,7 +25,7 @@ class PauliAlgebraSumsTest {
 
     /** Dimension of the centre: the null space of x ↦ ([x, b_1], …, [x, b_d]) in basis coordinates. */
     static int centreDimension(PauliAlgebra a) {
-        List<PauliSum> b = a.basis();
+        List<PauliCombination> b = a.basis();
         int d = b.size();
         Map<String, Integer> rowOf = new HashMap<>();
         List<double[]> rows = new ArrayList<>();
@@ -66,7 +66,7 @@ class PauliAlgebraSumsTest {
             // the type comes from the dense algebra here; its centre part must be the published u(1)^2
             assertTrue(a.type().endsWith(" ⊕ u(1)^2"), a.type());
         }
-        for (PauliSum g : SpinChains.isingSummed(n, true)) {
+        for (PauliCombination g : SpinChains.isingSummed(n, true)) {
             assertTrue(a.contains(g));
         }
     }
@@ -78,10 +78,10 @@ class PauliAlgebraSumsTest {
     @Test
     void localControlsOnAPath() {
         for (int n = 2; n <= 6; n++) {
-            List<PauliSum> g = new ArrayList<>(SpinChains.perBond(n, false, "ZZ"));
+            List<PauliCombination> g = new ArrayList<>(SpinChains.perBond(n, false, "ZZ"));
             for (int i = 0; i < n; i++) {
-                g.add(PauliSum.of(PauliString.single(n, i, 'X')));
-                g.add(PauliSum.of(PauliString.single(n, i, 'Y')));
+                g.add(PauliCombination.of(PauliString.single(n, i, 'X')));
+                g.add(PauliCombination.of(PauliString.single(n, i, 'Y')));
             }
             PauliAlgebra a = PauliAlgebra.generatedBy(g);
             assertEquals((1 << (2 * n)) - 1, a.dimension(), "n = " + n);
@@ -99,12 +99,12 @@ class PauliAlgebraSumsTest {
         // sums per qubit span X_i and Y_i again and give su(2^n).
         int n = 4;
         Random r = new Random(7);
-        List<PauliSum> one = new ArrayList<>(SpinChains.perBond(n, false, "ZZ"));
-        List<PauliSum> two = new ArrayList<>(SpinChains.perBond(n, false, "ZZ"));
+        List<PauliCombination> one = new ArrayList<>(SpinChains.perBond(n, false, "ZZ"));
+        List<PauliCombination> two = new ArrayList<>(SpinChains.perBond(n, false, "ZZ"));
         for (int i = 0; i < n; i++) {
             PauliString x = PauliString.single(n, i, 'X'), y = PauliString.single(n, i, 'Y');
-            PauliSum s1 = PauliSum.of(1 + r.nextDouble(), x).plus(PauliSum.of(1 + r.nextDouble(), y));
-            PauliSum s2 = PauliSum.of(1 + r.nextDouble(), x).minus(PauliSum.of(1 + r.nextDouble(), y));
+            PauliCombination s1 = PauliCombination.of(1 + r.nextDouble(), x).plus(PauliCombination.of(1 + r.nextDouble(), y));
+            PauliCombination s2 = PauliCombination.of(1 + r.nextDouble(), x).minus(PauliCombination.of(1 + r.nextDouble(), y));
             one.add(s1);
             two.add(s1);
             two.add(s2);
@@ -114,9 +114,9 @@ class PauliAlgebraSumsTest {
         assertEquals(LieAlgebra.generatedBy(dense(one)).dimension(), PauliAlgebra.generatedBy(one).dimension());
     }
 
-    static List<Operator> dense(List<PauliSum> sums) {
+    static List<Operator> dense(List<PauliCombination> sums) {
         List<Operator> d = new ArrayList<>();
-        for (PauliSum s : sums) {
+        for (PauliCombination s : sums) {
             d.add(s.toOperator());
         }
         return d;
@@ -125,42 +125,42 @@ class PauliAlgebraSumsTest {
     // A sum whose strings commute pairwise generates only u(1): one dimension, and the basis is the normalised sum.
     @Test
     void singleSumAndEchelonNormalisation() {
-        PauliAlgebra a = PauliAlgebra.generatedBy(List.of(PauliSum.parse("2 XX + 4 ZZ")));
+        PauliAlgebra a = PauliAlgebra.generatedBy(List.of(PauliCombination.parse("2 XX + 4 ZZ")));
         assertEquals(1, a.dimension());
-        PauliSum b = a.basis().get(0);
+        PauliCombination b = a.basis().get(0);
         assertEquals(2, b.size());
         // pivot = the largest coefficient, scaled to 1
         assertEquals(1.0, b.coefficient(PauliString.of("ZZ")));
         assertEquals(0.5, b.coefficient(PauliString.of("XX")));
-        assertTrue(a.contains(PauliSum.parse("-3 XX - 6 ZZ")));
-        assertFalse(a.contains(PauliSum.parse("XX")));
-        assertTrue(a.contains(PauliSum.zero(2)));
+        assertTrue(a.contains(PauliCombination.parse("-3 XX - 6 ZZ")));
+        assertFalse(a.contains(PauliCombination.parse("XX")));
+        assertTrue(a.contains(PauliCombination.zero(2)));
     }
 
     // su(2) from the sums X + Y and Z (Pauli algebra, common practice): the elimination ends on single strings, so
     // the exact string identification applies; a large algebra of sums is not named.
     @Test
     void typesOfSumAlgebras() {
-        PauliAlgebra su2 = PauliAlgebra.generatedBy(List.of(PauliSum.parse("X + Y"), PauliSum.parse("Z")));
+        PauliAlgebra su2 = PauliAlgebra.generatedBy(List.of(PauliCombination.parse("X + Y"), PauliCombination.parse("Z")));
         assertEquals(3, su2.dimension());
         assertTrue(su2.isStringBasis());
         assertEquals("su(2)", su2.type());
-        assertEquals(List.of(PauliSum.of("X"), PauliSum.of("Y"), PauliSum.of("Z")), su2.basis());
+        assertEquals(List.of(PauliCombination.of("X"), PauliCombination.of("Y"), PauliCombination.of("Z")), su2.basis());
         PauliAlgebra big = PauliAlgebra.generatedBy(SpinChains.isingSummed(8, true));
         assertFalse(big.isStringBasis());
         assertEquals("unknown", big.type());
     }
 
-    static List<PauliSum> randomGenerators(Random r, int n) {
-        List<PauliSum> gens = new ArrayList<>();
+    static List<PauliCombination> randomGenerators(Random r, int n) {
+        List<PauliCombination> gens = new ArrayList<>();
         int m = 1 + r.nextInt(3);
         for (int g = 0; g < m; g++) {
-            PauliSum s = PauliSum.zero(n);
+            PauliCombination s = PauliCombination.zero(n);
             if (r.nextInt(3) == 0) {
                 // a rotated one-qubit control a X_q + b Y_q: brackets with it cancel exactly in structured ways
                 int q = r.nextInt(n);
-                s = PauliSum.of(1 + r.nextDouble(), PauliString.single(n, q, 'X'))
-                        .plus(PauliSum.of(r.nextGaussian(), PauliString.single(n, q, 'Y')));
+                s = PauliCombination.of(1 + r.nextDouble(), PauliString.single(n, q, 'X'))
+                        .plus(PauliCombination.of(r.nextGaussian(), PauliString.single(n, q, 'Y')));
             } else {
                 for (int t = 1 + r.nextInt(3); t > 0; t--) {
                     String letters = PauliStringTest.randomLetters(r, n);
@@ -169,7 +169,7 @@ class PauliAlgebraSumsTest {
                         letters = letters.substring(0, 2) + "I".repeat(n - 2);
                     }
                     double c = r.nextBoolean() ? r.nextInt(5) - 2 : r.nextGaussian();
-                    s = s.plus(PauliSum.of(c, PauliString.of(letters)));
+                    s = s.plus(PauliCombination.of(c, PauliString.of(letters)));
                 }
             }
             gens.add(s);
@@ -188,15 +188,15 @@ class PauliAlgebraSumsTest {
     void agreesWithDenseClosure(long seed) {
         Random r = new Random(seed);
         int n = r.nextInt(5) == 0 ? 4 : 3;
-        List<PauliSum> gens = randomGenerators(r, n);
+        List<PauliCombination> gens = randomGenerators(r, n);
         PauliAlgebra a = PauliAlgebra.generatedBy(gens);
         LieAlgebra d = LieAlgebra.generatedBy(dense(gens));
         assertEquals(d.dimension(), a.dimension(), gens.toString());
-        for (PauliSum b : a.basis()) {
+        for (PauliCombination b : a.basis()) {
             assertTrue(d.contains(b.toOperator()), b.toString());
         }
         // reduced echelon form: each element has a pivot string with coefficient 1 absent from all others
-        for (PauliSum b : a.basis()) {
+        for (PauliCombination b : a.basis()) {
             boolean found = false;
             for (PauliString p : b.strings()) {
                 if (b.coefficient(p) == 1.0
@@ -207,7 +207,7 @@ class PauliAlgebraSumsTest {
             assertTrue(found, b.toString());
         }
         // closed: brackets of basis elements are contained
-        List<PauliSum> bs = a.basis();
+        List<PauliCombination> bs = a.basis();
         for (int i = 0; i < Math.min(bs.size(), 12); i++) {
             for (int j = 0; j < i; j++) {
                 assertTrue(a.contains(bs.get(i).commutator(bs.get(j))));
@@ -239,19 +239,19 @@ class PauliAlgebraSumsTest {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> PauliAlgebra.generatedBy(List.of()));
         assertEquals(Reason.EMPTY, e.reason());
         assertTrue(e.getMessage().startsWith("sums:"), e.getMessage());
-        List<PauliSum> withNull = new ArrayList<>();
-        withNull.add(PauliSum.of("XX"));
+        List<PauliCombination> withNull = new ArrayList<>();
+        withNull.add(PauliCombination.of("XX"));
         withNull.add(null);
         e = assertThrows(InvalidInputException.class, () -> PauliAlgebra.generatedBy(withNull));
         assertEquals(Reason.NULL, e.reason());
         assertTrue(e.getMessage().contains("index 1"), e.getMessage());
         e = assertThrows(InvalidInputException.class,
-                () -> PauliAlgebra.generatedBy(List.of(PauliSum.of("XX"), PauliSum.of("XXX"))));
+                () -> PauliAlgebra.generatedBy(List.of(PauliCombination.of("XX"), PauliCombination.of("XXX"))));
         assertEquals(Reason.DIMENSION_MISMATCH, e.reason());
         assertTrue(e.getMessage().contains("3 qubits at index 1"), e.getMessage());
         assertEquals(Reason.NULL,
                 assertThrows(InvalidInputException.class, () -> PauliAlgebra.generatedBy(null)).reason());
-        e = assertThrows(InvalidInputException.class, () -> PauliAlgebra.generatedBy(List.of(PauliSum.of("X")), 0));
+        e = assertThrows(InvalidInputException.class, () -> PauliAlgebra.generatedBy(List.of(PauliCombination.of("X")), 0));
         assertEquals(Reason.OUT_OF_RANGE, e.reason());
         assertTrue(e.getMessage().contains("maxDimension"), e.getMessage());
         // limits, on the exact string path and on the elimination path
@@ -263,9 +263,9 @@ class PauliAlgebraSumsTest {
                 () -> PauliAlgebra.generatedBy(SpinChains.isingSummed(10, true), 20));
         assertEquals(Reason.LIMIT_EXCEEDED, e.reason());
         assertEquals(Reason.DIMENSION_MISMATCH, assertThrows(InvalidInputException.class,
-                () -> PauliAlgebra.generatedBy(List.of(PauliSum.of("XX"))).contains(PauliSum.of("X"))).reason());
+                () -> PauliAlgebra.generatedBy(List.of(PauliCombination.of("XX"))).contains(PauliCombination.of("X"))).reason());
         // zero generators give the zero algebra
-        PauliAlgebra zero = PauliAlgebra.generatedBy(List.of(PauliSum.zero(3)));
+        PauliAlgebra zero = PauliAlgebra.generatedBy(List.of(PauliCombination.zero(3)));
         assertEquals(0, zero.dimension());
         assertEquals("0", zero.type());
     }

@@ -44,8 +44,8 @@ class PauliAlgebraTest {
             assertEquals("so(" + 2 * n + ")", a.type());
         }
         // a Majorana bilinear spanning the whole chain: Y_0 Z … Z X_{n−1}-type strings are in, a lone Y is not
-        assertFalse(a.contains(PauliSum.of(PauliString.single(n, n - 1, 'Y'))));
-        assertTrue(a.contains(PauliSum.of(PauliString.single(n, n - 1, 'X'))));
+        assertFalse(a.contains(PauliCombination.of(PauliString.single(n, n - 1, 'Y'))));
+        assertTrue(a.contains(PauliCombination.of(PauliString.single(n, n - 1, 'X'))));
     }
 
     @Test
@@ -55,7 +55,7 @@ class PauliAlgebraTest {
         assertEquals("so(100)", a.type());
         // the basis is {Z_j} ∪ {A_i Z…Z B_j}-type strings: every basis string has weight ≤ 50 and is in the algebra
         assertTrue(a.contains(a.basis().get(4949)));
-        assertFalse(a.contains(PauliSum.of(PauliString.single(50, 3, 'Y'))));
+        assertFalse(a.contains(PauliCombination.of(PauliString.single(50, 3, 'Y'))));
     }
 
     /**
@@ -151,11 +151,11 @@ class PauliAlgebraTest {
     @Test
     void freeFermionVariants() {
         for (int n = 3; n <= 6; n++) {
-            List<PauliSum> ring = new ArrayList<>(SpinChains.perBond(n, true, "XX"));
-            List<PauliSum> hop = new ArrayList<>(SpinChains.perBond(n, false, "XX", "XY", "YX", "YY", "ZZ"));
+            List<PauliCombination> ring = new ArrayList<>(SpinChains.perBond(n, true, "XX"));
+            List<PauliCombination> hop = new ArrayList<>(SpinChains.perBond(n, false, "XX", "XY", "YX", "YY", "ZZ"));
             for (int i = 0; i < n; i++) {
-                ring.add(PauliSum.of(PauliString.single(n, i, 'Z')));
-                hop.add(PauliSum.of(PauliString.single(n, i, 'Z')));
+                ring.add(PauliCombination.of(PauliString.single(n, i, 'Z')));
+                hop.add(PauliCombination.of(PauliString.single(n, i, 'Z')));
             }
             PauliAlgebra a = PauliAlgebra.generatedBy(ring), b = PauliAlgebra.generatedBy(hop);
             assertEquals(2 * n * (2 * n - 1), a.dimension());

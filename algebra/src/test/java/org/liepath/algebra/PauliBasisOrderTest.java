@@ -29,7 +29,7 @@ class PauliBasisOrderTest {
     void basisIsTheClosureInCanonicalOrder(long seed) {
         Random r = new Random(seed);
         int q = QUBITS[r.nextInt(QUBITS.length)];
-        List<PauliSum> gens = new ArrayList<>();
+        List<PauliCombination> gens = new ArrayList<>();
         List<PauliString> strings = new ArrayList<>();
         int k = 1 + r.nextInt(4);
         for (int g = 0; g < k; g++) {
@@ -45,25 +45,25 @@ class PauliBasisOrderTest {
                 continue;
             }
             strings.add(p);
-            gens.add(PauliSum.of(2.5 - g, p));
+            gens.add(PauliCombination.of(2.5 - g, p));
         }
         if (gens.isEmpty()) {
             return;
         }
         TreeSet<PauliString> expected = bruteForce(strings);
         PauliAlgebra a = PauliAlgebra.generatedBy(gens);
-        List<PauliSum> basis = a.basis();
+        List<PauliCombination> basis = a.basis();
         assertEquals(expected.size(), a.dimension());
         assertEquals(expected.size(), basis.size());
         List<PauliString> got = new ArrayList<>();
-        for (PauliSum s : basis) {
+        for (PauliCombination s : basis) {
             assertEquals(1, s.size());
             assertEquals(1.0, s.coefficientAt(0));
             got.add(s.stringAt(0));
         }
         assertEquals(new ArrayList<>(expected), got, "basis in canonical order, q = " + q);
         for (PauliString p : got) {
-            assertTrue(a.contains(PauliSum.of(p)));
+            assertTrue(a.contains(PauliCombination.of(p)));
         }
     }
 

@@ -1,7 +1,7 @@
 package org.liepath.benchmarks;
 
 import org.liepath.algebra.PauliString;
-import org.liepath.algebra.PauliSum;
+import org.liepath.algebra.PauliCombination;
 import org.liepath.core.Operator;
 
 import java.util.ArrayList;
@@ -13,21 +13,21 @@ final class IsingChains {
     }
 
     /** Transverse-field Ising chain with separate terms, open: {X_i} ∪ {Z_iZ_{i+1}}; its algebra is so(2n). */
-    static List<PauliSum> perTerm(int n) {
-        List<PauliSum> g = new ArrayList<>();
+    static List<PauliCombination> perTerm(int n) {
+        List<PauliCombination> g = new ArrayList<>();
         for (int i = 0; i < n; i++) {
-            g.add(PauliSum.of(PauliString.single(n, i, 'X')));
+            g.add(PauliCombination.of(PauliString.single(n, i, 'X')));
         }
         for (int i = 0; i + 1 < n; i++) {
-            g.add(PauliSum.of(PauliString.identity(n).with(i, 'Z').with(i + 1, 'Z')));
+            g.add(PauliCombination.of(PauliString.identity(n).with(i, 'Z').with(i + 1, 'Z')));
         }
         return g;
     }
 
     /** The same terms as dense matrices. */
-    static List<Operator> dense(List<PauliSum> sums) {
+    static List<Operator> dense(List<PauliCombination> sums) {
         List<Operator> d = new ArrayList<>();
-        for (PauliSum s : sums) {
+        for (PauliCombination s : sums) {
             d.add(s.toOperator());
         }
         return d;

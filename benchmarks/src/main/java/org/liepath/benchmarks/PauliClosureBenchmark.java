@@ -2,7 +2,7 @@ package org.liepath.benchmarks;
 
 import org.liepath.algebra.LieAlgebra;
 import org.liepath.algebra.PauliAlgebra;
-import org.liepath.algebra.PauliSum;
+import org.liepath.algebra.PauliCombination;
 import org.liepath.core.Operator;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -43,7 +43,7 @@ public class PauliClosureBenchmark {
     public static class Small {
         @Param({"3", "4", "5"})
         public int n;
-        List<PauliSum> sums;
+        List<PauliCombination> sums;
         List<Operator> ops;
 
         @Setup
@@ -58,7 +58,7 @@ public class PauliClosureBenchmark {
     public static class Large {
         @Param({"12", "24", "50"})
         public int n;
-        List<PauliSum> sums;
+        List<PauliCombination> sums;
 
         @Setup
         public void setUp() {
@@ -67,7 +67,7 @@ public class PauliClosureBenchmark {
     }
 
     /**
-     * The closure and then the basis as a list of {@link PauliSum} objects (built on the first call of basis(),
+     * The closure and then the basis as a list of {@link PauliCombination} objects (built on the first call of basis(),
      * one string object and one sum per element): a conservative figure, since the dense closure's result holds its
      * basis as matrices anyway.
      */

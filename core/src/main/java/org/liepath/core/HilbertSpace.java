@@ -139,7 +139,7 @@ public final class HilbertSpace {
             Require.index(levels[s], dims[s], "levels[" + s + "]");
             idx = idx * dims[s] + levels[s];
         }
-        return StateVector.basis(total, idx);
+        return StateVector.unit(total, idx);
     }
 
     @Override

@@ -40,7 +40,7 @@ public final class StateVector {
      * @throws InvalidInputException for n &lt; 1, LIMIT_EXCEEDED for n &gt; MAX_DIM, OUT_OF_RANGE for k outside
      *                               0 … n − 1
      */
-    public static StateVector basis(int n, int k) {
+    public static StateVector unit(int n, int k) {
         Require.positive(n, "n");
         if (n > MAX_DIM) {
             throw InvalidInputException.of(Reason.LIMIT_EXCEEDED, "n", "a dimension ≤ " + MAX_DIM, n);

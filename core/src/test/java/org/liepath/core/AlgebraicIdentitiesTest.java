@@ -47,7 +47,7 @@ class AlgebraicIdentitiesTest {
         assertEquals(new Complex(2, 0), X.inner(X));
         assertEquals(Complex.ZERO, X.inner(Y));
         // σz|0⟩ = +|0⟩ (convention: |0⟩ = (1,0)ᵀ is the +1 eigenvector)
-        assertEquals(StateVector.basis(2, 0), StateVector.basis(2, 0).apply(Z));
+        assertEquals(StateVector.unit(2, 0), StateVector.unit(2, 0).apply(Z));
     }
 
     @Test
@@ -69,8 +69,8 @@ class AlgebraicIdentitiesTest {
             }
         }
         // qubit 0 is the most significant bit: X on qubit 0 of |000⟩ gives |100⟩ = index 4
-        assertEquals(StateVector.basis(8, 4), StateVector.basis(8, 0).apply(Pauli.string("XII")));
-        assertEquals(StateVector.basis(8, 1), StateVector.basis(8, 0).apply(Pauli.string("IIX")));
+        assertEquals(StateVector.unit(8, 4), StateVector.unit(8, 0).apply(Pauli.string("XII")));
+        assertEquals(StateVector.unit(8, 1), StateVector.unit(8, 0).apply(Pauli.string("IIX")));
     }
 
     // ------------------------------------------------------------------ spin
@@ -328,8 +328,8 @@ class AlgebraicIdentitiesTest {
         // embedded operators on different subsystems commute
         assertEquals(Operator.zero(12), hs.embed(x, 0).commutator(hs.embed(a, 1)));
         // basis |1 2 0⟩ = index 1·6 + 2·2 + 0 = 10
-        assertEquals(StateVector.basis(12, 10), hs.basis(1, 2, 0));
-        assertEquals(StateVector.basis(2, 1).kron(StateVector.basis(3, 2)).kron(StateVector.basis(2, 0)),
+        assertEquals(StateVector.unit(12, 10), hs.basis(1, 2, 0));
+        assertEquals(StateVector.unit(2, 1).kron(StateVector.unit(3, 2)).kron(StateVector.unit(2, 0)),
                 hs.basis(1, 2, 0));
         // qubit embedding agrees with Pauli strings
         assertEquals(Pauli.string("IZI"), HilbertSpace.of(2, 2, 2).embed(z, 1));
@@ -349,8 +349,8 @@ class AlgebraicIdentitiesTest {
         // three qubits, control 2 and target 0: |c⟩ on qubit 2 flips qubit 0
         HilbertSpace three = HilbertSpace.of(2, 2, 2);
         Operator g = three.embed(cnot, 2, 0);
-        assertEquals(StateVector.basis(8, 0b101), StateVector.basis(8, 0b001).apply(g));
-        assertEquals(StateVector.basis(8, 0b010), StateVector.basis(8, 0b010).apply(g));
+        assertEquals(StateVector.unit(8, 0b101), StateVector.unit(8, 0b001).apply(g));
+        assertEquals(StateVector.unit(8, 0b010), StateVector.unit(8, 0b010).apply(g));
         // a product operator placed in ascending order equals the explicit Kronecker product
         java.util.Random r = new java.util.Random(4);
         HilbertSpace hs = HilbertSpace.of(2, 3, 2);

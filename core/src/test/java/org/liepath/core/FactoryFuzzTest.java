@@ -132,13 +132,13 @@ class FactoryFuzzTest {
                 attempt(t, "zero", () -> Operator.zero(big));
                 attempt(t, "unit", () -> Operator.unit(big, r.nextInt(7) - 2, r.nextInt(7) - 2));
                 attempt(t, "diagonal", () -> Operator.diagonal(randomFlat(r, r.nextInt(4))));
-                attempt(t, "basis", () -> StateVector.basis(big, r.nextInt(7) - 2));
+                attempt(t, "basis", () -> StateVector.unit(big, r.nextInt(7) - 2));
                 StateVector s = attempt(t, "state of", () -> StateVector.of(randomFlat(r, n), randomFlat(r, n)));
                 attempt(t, "state real", () -> StateVector.real(randomFlat(r, n)));
                 StateVector u = attempt(t, "state of", () -> StateVector.of(randomFlat(r, n), randomFlat(r, n)));
                 attempt(t, "outer", () -> Operator.outer(s, u));
                 if (a != null) {
-                    attempt(t, "apply", () -> (s == null ? StateVector.basis(n, 0) : s).apply(a));
+                    attempt(t, "apply", () -> (s == null ? StateVector.unit(n, 0) : s).apply(a));
                     attempt(t, "fromEjml", () -> Operator.fromEjml(a.toEjml()));
                 }
             }
@@ -228,8 +228,8 @@ class FactoryFuzzTest {
             attempt(t, "identity map", () -> Superoperator.identity(n));
         }
         assertEquals(0, t.accepted, "accepted " + t.accepted + " huge sizes");
-        attempt(t, "basis", () -> StateVector.basis(Integer.MAX_VALUE, 0));
-        attempt(t, "basis", () -> StateVector.basis(StateVector.MAX_DIM + 1, 0));
+        attempt(t, "basis", () -> StateVector.unit(Integer.MAX_VALUE, 0));
+        attempt(t, "basis", () -> StateVector.unit(StateVector.MAX_DIM + 1, 0));
         assertEquals(0, t.accepted, "accepted a huge state vector");
         double[][] nullRow = new double[3][];
         nullRow[0] = new double[3];

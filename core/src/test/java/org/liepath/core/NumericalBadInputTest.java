@@ -16,7 +16,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class NumericalBadInputTest {
     private static final Operator H = Operator.of(new double[][]{{1, 0.5}, {0.5, -1}}, new double[][]{{0, 0.2}, {-0.2, 0}});
     private static final Operator NOT_HERMITIAN = Operator.real(new double[][]{{0, 1}, {0, 0}});
-    private static final StateVector PSI = StateVector.basis(2, 0);
+    private static final StateVector PSI = StateVector.unit(2, 0);
 
     private static InvalidInputException expect(Reason reason, String argument, String seen, Executable call) {
         InvalidInputException e = assertThrows(InvalidInputException.class, call);
@@ -51,7 +51,7 @@ class NumericalBadInputTest {
         expect(Reason.OUT_OF_RANGE, "tol", "-1.0E-8", () -> Krylov.expMinusI(H, 1.0, PSI, -1e-8));
         expect(Reason.OUT_OF_RANGE, "tol", "0.0", () -> Krylov.expMinusI(H, 1.0, PSI, 0.0));
         expect(Reason.NOT_FINITE, "tol", "NaN", () -> Krylov.expMinusI(H, 1.0, PSI, Double.NaN));
-        expect(Reason.DIMENSION_MISMATCH, "psi", "dimension 3", () -> Krylov.expMinusI(H, 1.0, StateVector.basis(3, 0), 1e-8));
+        expect(Reason.DIMENSION_MISMATCH, "psi", "dimension 3", () -> Krylov.expMinusI(H, 1.0, StateVector.unit(3, 0), 1e-8));
         expect(Reason.OUT_OF_RANGE, "m", "0", () -> Krylov.expMinusI(H, 1.0, PSI, 1e-8, 0));
     }
 
@@ -61,10 +61,10 @@ class NumericalBadInputTest {
         expect(Reason.NULL, "v", "null", () -> Krylov.expAction(NOT_HERMITIAN, 1.0, null, 1e-8));
         expect(Reason.NOT_FINITE, "t", "NaN", () -> Krylov.expAction(NOT_HERMITIAN, Double.NaN, PSI, 1e-8));
         expect(Reason.OUT_OF_RANGE, "tol", "-1.0", () -> Krylov.expAction(NOT_HERMITIAN, 1.0, PSI, -1.0));
-        expect(Reason.DIMENSION_MISMATCH, "v", "dimension 4", () -> Krylov.expAction(NOT_HERMITIAN, 1.0, StateVector.basis(4, 1), 1e-8));
+        expect(Reason.DIMENSION_MISMATCH, "v", "dimension 4", () -> Krylov.expAction(NOT_HERMITIAN, 1.0, StateVector.unit(4, 1), 1e-8));
         expect(Reason.OUT_OF_RANGE, "m", "-3", () -> Krylov.expAction(NOT_HERMITIAN, 1.0, PSI, 1e-8, -3));
         // a non-Hermitian generator is fine here: exp(tN) for the nilpotent N = [[0, 1], [0, 0]] is I + tN
-        StateVector out = Krylov.expAction(NOT_HERMITIAN, 2.0, StateVector.basis(2, 1), 1e-10).state();
+        StateVector out = Krylov.expAction(NOT_HERMITIAN, 2.0, StateVector.unit(2, 1), 1e-10).state();
         assertEquals(2.0, out.re(0), 1e-14);
         assertEquals(1.0, out.re(1), 1e-14);
     }

@@ -135,7 +135,7 @@ class OperatorBasicsTest {
         StateVector s = StateVector.real(0, 1), negS = StateVector.real(-0.0, 1);
         assertEquals(s, negS);
         assertEquals(s.hashCode(), negS.hashCode());
-        assertNotEquals(StateVector.basis(2, 0), StateVector.basis(3, 0));
+        assertNotEquals(StateVector.unit(2, 0), StateVector.unit(3, 0));
     }
 
     @Test
@@ -153,7 +153,7 @@ class OperatorBasicsTest {
         assertEquals(10, big.split("\n").length, "header, 8 rows, summary");
         assertEquals("StateVector 2 [0.7071, 0.7071i]", StateVector.of(new double[]{Math.sqrt(0.5), 0},
                 new double[]{0, Math.sqrt(0.5)}).toString());
-        assertTrue(StateVector.basis(20, 0).toString().endsWith(", … (4 more)]"));
+        assertTrue(StateVector.unit(20, 0).toString().endsWith(", … (4 more)]"));
         assertEquals("HilbertSpace[2, 3] (dimension 6)", HilbertSpace.of(2, 3).toString());
     }
 
@@ -197,12 +197,12 @@ class OperatorBasicsTest {
         assertEquals(4.0, psi.im(1), 0);
         // ⟨ψ|φ⟩ is conjugate-linear in ψ: ⟨i e1|e1⟩ = −i
         StateVector ie1 = StateVector.of(new double[2], new double[]{0, 1});
-        assertEquals(new Complex(0, -1), ie1.inner(StateVector.basis(2, 1)));
+        assertEquals(new Complex(0, -1), ie1.inner(StateVector.unit(2, 1)));
         // ⟨ψ|σz|ψ⟩ = 9 − 16
         assertEquals(new Complex(-7, 0), psi.expectation(Pauli.z()));
-        assertEquals(StateVector.basis(2, 1), StateVector.basis(2, 0).apply(Pauli.x()));
+        assertEquals(StateVector.unit(2, 1), StateVector.unit(2, 0).apply(Pauli.x()));
         assertEquals(StateVector.of(new double[]{0, -4}, new double[]{3, 0}), psi.scale(new Complex(0, 1)));
-        assertEquals(StateVector.real(0, 0, 1, 0), StateVector.basis(2, 1).kron(StateVector.basis(2, 0)));
+        assertEquals(StateVector.real(0, 0, 1, 0), StateVector.unit(2, 1).kron(StateVector.unit(2, 0)));
         assertEquals(5.0, psi.distance(StateVector.real(0, 0)), 0);
         double[] r = new double[3], i = new double[3];
         psi.copyTo(r, i);

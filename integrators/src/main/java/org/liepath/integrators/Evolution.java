@@ -7,7 +7,7 @@ import org.liepath.core.StateVector;
 import org.liepath.core.Superoperator;
 
 /**
- * The outcome of {@link Evolve#run()}: the status, the result in the run's mode, the trajectory, the work done, an
+ * The outcome of {@link Evolve#run()}: the status, the result in the run's mode, the timeline, the work done, an
  * error estimate and the scheme used.
  *
  * <p>Modes: a Hamiltonian run gives {@link #propagator()} U(t1, t0), or with {@link Evolve#state} the state
@@ -17,17 +17,17 @@ import org.liepath.core.Superoperator;
  *
  * <p><b>Failed runs</b>: when {@link #status()} is not a success, the result accessors throw
  * {@link IllegalStateException} naming the status, so that a partial result is never mistaken for the answer. The
- * state reached before the failure is the last sample of {@link #trajectory()}, at time {@code status().time()}.
+ * state reached before the failure is the last sample of {@link #timeline()}, at time {@code status().time()}.
  *
  * <p>Immutable and thread-safe.
  */
 public final class Evolution {
     private final Scheme scheme;
     private final Status status;
-    private final Trajectory.Mode mode;
+    private final Timeline.Mode mode;
     private final int n;
     private final double[] re, im;
-    private final Trajectory trajectory;
+    private final Timeline timeline;
     private final Stats stats;
     /** The estimate, or NaN until a deferred estimate has been made (a benign race: every thread gets the same). */
     private volatile double errorEstimate;
@@ -35,13 +35,13 @@ public final class Evolution {
     private final java.util.function.DoubleSupplier deferredEstimate;
     private final Coordinates coordinates;
 
-    Evolution(Scheme scheme, Status status, Trajectory.Mode mode, int n, double[] re, double[] im,
-              Trajectory trajectory, Stats stats, double errorEstimate, Coordinates coordinates) {
-        this(scheme, status, mode, n, re, im, trajectory, stats, errorEstimate, null, coordinates);
+    Evolution(Scheme scheme, Status status, Timeline.Mode mode, int n, double[] re, double[] im,
+              Timeline timeline, Stats stats, double errorEstimate, Coordinates coordinates) {
+        this(scheme, status, mode, n, re, im, timeline, stats, errorEstimate, null, coordinates);
     }
 
-    Evolution(Scheme scheme, Status status, Trajectory.Mode mode, int n, double[] re, double[] im,
-              Trajectory trajectory, Stats stats, double errorEstimate,
+    Evolution(Scheme scheme, Status status, Timeline.Mode mode, int n, double[] re, double[] im,
+              Timeline timeline, Stats stats, double errorEstimate,
               java.util.function.DoubleSupplier deferredEstimate, Coordinates coordinates) {
         this.deferredEstimate = deferredEstimate;
         this.scheme = scheme;
@@ -50,7 +50,7 @@ public final class Evolution {
         this.n = n;
         this.re = re;
         this.im = im;
-        this.trajectory = trajectory;
+        this.timeline = timeline;
         this.stats = stats;
         this.errorEstimate = errorEstimate;
         this.coordinates = coordinates;
@@ -68,25 +68,25 @@ public final class Evolution {
 
     /** @return U(t1, t0) of a Hamiltonian run in propagator mode (or a Wei–Norman run) */
     public Operator propagator() {
-        need(Trajectory.Mode.PROPAGATOR, "propagator()");
+        need(Timeline.Mode.PROPAGATOR, "propagator()");
         return Operator.ofPlanar(n, re, im);
     }
 
     /** @return ψ(t1) of a Hamiltonian run started with {@link Evolve#state} */
     public StateVector state() {
-        need(Trajectory.Mode.STATE, "state()");
+        need(Timeline.Mode.STATE, "state()");
         return StateVector.of(re, im);
     }
 
     /** @return ρ(t1) of a GKLS run started with {@link Evolve#density} */
     public Operator density() {
-        need(Trajectory.Mode.DENSITY, "density()");
-        return Trajectory.unvec(n, re, im);
+        need(Timeline.Mode.DENSITY, "density()");
+        return Timeline.unvec(n, re, im);
     }
 
     /** @return the dynamical map from t0 to t1 of a GKLS run without an initial density (column stacking) */
     public Superoperator channel() {
-        need(Trajectory.Mode.CHANNEL, "channel()");
+        need(Timeline.Mode.CHANNEL, "channel()");
         return Superoperator.ofMatrix(Operator.ofPlanar(n * n, re, im));
     }
 
@@ -99,10 +99,10 @@ public final class Evolution {
      * @throws IllegalStateException for a closed-system run or a failed run
      */
     public double minEigenvalue() {
-        if (mode == Trajectory.Mode.DENSITY) {
+        if (mode == Timeline.Mode.DENSITY) {
             return minEigenvalue(density());
         }
-        if (mode == Trajectory.Mode.CHANNEL) {
+        if (mode == Timeline.Mode.CHANNEL) {
             return minEigenvalue(channel().choi());
         }
         throw new IllegalStateException("minEigenvalue() needs an open-system run; this run gave a "
@@ -130,8 +130,19 @@ public final class Evolution {
     }
 
     /** @return the samples of the run (always including t0 and the time reached) */
-    public Trajectory trajectory() {
-        return trajectory;
+    public Timeline timeline() {
+        return timeline;
+    }
+
+    /**
+     * The earlier name of {@link #timeline()}, kept so that scripts written against it still run.
+     *
+     * @return the same samples as {@link #timeline()}
+     * @deprecated renamed to {@link #timeline()}: the samples of one deterministic run, not stochastic trajectories
+     */
+    @Deprecated
+    public Timeline trajectory() {
+        return timeline();
     }
 
     /** @return the work done */
@@ -180,10 +191,10 @@ public final class Evolution {
         return coordinates;
     }
 
-    private void need(Trajectory.Mode wanted, String what) {
+    private void need(Timeline.Mode wanted, String what) {
         if (!status.isSuccess()) {
             throw new IllegalStateException(what + " is not available: the run ended with " + status
-                    + " (the state reached is the last sample of trajectory())");
+                    + " (the state reached is the last sample of timeline())");
         }
         if (mode != wanted) {
             throw new IllegalStateException(what + " is not available: this run computed a "

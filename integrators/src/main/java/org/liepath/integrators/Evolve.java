@@ -348,8 +348,8 @@ public final class Evolve {
         boolean exact = adaptive && ham.isPiecewiseConstant();
         LinearSystem sys = h != null ? (exact ? LinearSystem.of(h) : s.system(h)) : LinearSystem.of(l);
         int n = ham.dim(), m = sys.dim();
-        Trajectory.Mode mode = h != null ? (psi != null ? Trajectory.Mode.STATE : Trajectory.Mode.PROPAGATOR)
-                : (rho0 != null ? Trajectory.Mode.DENSITY : Trajectory.Mode.CHANNEL);
+        Timeline.Mode mode = h != null ? (psi != null ? Timeline.Mode.STATE : Timeline.Mode.PROPAGATOR)
+                : (rho0 != null ? Timeline.Mode.DENSITY : Timeline.Mode.CHANNEL);
         Run.Spec spec = new Run.Spec();
         spec.t0 = t0;
         spec.t1 = t1;
@@ -362,16 +362,16 @@ public final class Evolve {
         spec.monitor = monitor;
         StepObserver obs = observer;
         spec.observer = obs == null ? null : obs::onStep;
-        if (mode == Trajectory.Mode.STATE) {
+        if (mode == Timeline.Mode.STATE) {
             spec.p = 1;
             spec.x0r = new double[m];
             spec.x0i = new double[m];
             psi.copyTo(spec.x0r, spec.x0i);
-        } else if (mode == Trajectory.Mode.DENSITY) {
+        } else if (mode == Timeline.Mode.DENSITY) {
             spec.p = 1;
             spec.x0r = new double[m];
             spec.x0i = new double[m];
-            Trajectory.vec(rho0, spec.x0r, spec.x0i);
+            Timeline.vec(rho0, spec.x0r, spec.x0i);
         } else {
             spec.p = m;
             spec.x0r = new double[m * m];
@@ -434,13 +434,13 @@ public final class Evolve {
         }
     }
 
-    private static Evolution wrap(Scheme s, Trajectory.Mode mode, int n, Run.Result r,
+    private static Evolution wrap(Scheme s, Timeline.Mode mode, int n, Run.Result r,
                                   java.util.function.DoubleSupplier deferredEstimate) {
         Status status = status(Status.Kind.valueOf(r.outcome.name()), r.message, r.monitorFailure,
                 r.observerFailure, r.timeReached);
         Stats stats = new Stats(r.accepted, r.rejected, r.evaluations, r.exponentials, r.commutators, 0, r.nanos,
                 r.monitorFailure, r.observerFailure);
-        Trajectory traj = new Trajectory(mode, n, r.sampleTimes, r.sampleRe, r.sampleIm);
+        Timeline traj = new Timeline(mode, n, r.sampleTimes, r.sampleRe, r.sampleIm);
         return new Evolution(s, status, mode, n, r.xr, r.xi, traj, stats, r.errorSum, deferredEstimate, null);
     }
 
@@ -512,8 +512,8 @@ public final class Evolve {
         } catch (DriveException e) {
             Status st = status(Status.Kind.DRIVE_FAILED, e.getMessage(), monitorFailure[0], null, e.time());
             Stats stats = new Stats(0, 0, 0, 0, 0, 0, System.nanoTime() - start, monitorFailure[0], null);
-            Trajectory traj = new Trajectory(Trajectory.Mode.PROPAGATOR, h.dim(), List.of(), List.of(), List.of());
-            return new Evolution(s, st, Trajectory.Mode.PROPAGATOR, h.dim(), null, null, traj, stats, Double.NaN,
+            Timeline traj = new Timeline(Timeline.Mode.PROPAGATOR, h.dim(), List.of(), List.of(), List.of());
+            return new Evolution(s, st, Timeline.Mode.PROPAGATOR, h.dim(), null, null, traj, stats, Double.NaN,
                     null);
         }
         long nanos = System.nanoTime() - start;
@@ -527,7 +527,7 @@ public final class Evolve {
         Status st = status(kind, msg, monitorFailure[0], null, kind == Status.Kind.SUCCESS ? t1 : reached);
         Stats stats = new Stats(cr.steps, 0, cr.evaluations, 0, 0, cr.charts, nanos, monitorFailure[0], null);
         Coordinates coords = new Coordinates(cr.times, cr.coordinates);
-        Trajectory.Mode mode = psi != null ? Trajectory.Mode.STATE : Trajectory.Mode.PROPAGATOR;
+        Timeline.Mode mode = psi != null ? Timeline.Mode.STATE : Timeline.Mode.PROPAGATOR;
         List<Double> times = new ArrayList<>();
         List<double[]> re = new ArrayList<>(), im = new ArrayList<>();
         double[] fr = null, fi = null;
@@ -559,7 +559,7 @@ public final class Evolve {
             re.add(fr);
             im.add(fi);
         }
-        Trajectory traj = new Trajectory(mode, dim, times, re, im);
+        Timeline traj = new Timeline(mode, dim, times, re, im);
         java.util.function.DoubleSupplier deferred = null;
         if (kind == Status.Kind.SUCCESS && fr != null) {
             double[] gr = fr, gi = fi;

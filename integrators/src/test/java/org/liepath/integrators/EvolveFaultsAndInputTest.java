@@ -53,7 +53,7 @@ class EvolveFaultsAndInputTest {
 
     @Test
     void stateOrDensityOfTheWrongDimensionIsRefused() {
-        refused(Reason.DIMENSION_MISMATCH, "psi", "3", () -> Evolve.of(RABI).over(0, 1).state(StateVector.basis(3, 0)).run());
+        refused(Reason.DIMENSION_MISMATCH, "psi", "3", () -> Evolve.of(RABI).over(0, 1).state(StateVector.unit(3, 0)).run());
         Lindbladian l = Lindbladian.builder(RABI).jump(0.1, Operator.unit(2, 1, 0)).build();
         refused(Reason.DIMENSION_MISMATCH, "rho0", "3", () -> Evolve.of(l).over(0, 1).density(Operator.unit(3, 0, 0)).run());
     }

@@ -51,7 +51,7 @@ class EvolveHardeningTest {
         }
     }
 
-    static Bits bits(Evolution ev, Trajectory.Mode mode) {
+    static Bits bits(Evolution ev, Timeline.Mode mode) {
         double[] re, im;
         switch (mode) {
             case STATE -> {
@@ -89,20 +89,20 @@ class EvolveHardeningTest {
             double t1 = c.exactPiecewise() ? 1.5 : 3;
             Evolve base = Evolve.of(h).over(0, t1).scheme(c.get());
             if (c.fixedStep()) {
-                runs.put(c + " fixed", () -> bits(base.steps(37).run(), Trajectory.Mode.PROPAGATOR));
+                runs.put(c + " fixed", () -> bits(base.steps(37).run(), Timeline.Mode.PROPAGATOR));
             }
-            runs.put(c + " adaptive", () -> bits(base.tolerance(1e-9).run(), Trajectory.Mode.PROPAGATOR));
+            runs.put(c + " adaptive", () -> bits(base.tolerance(1e-9).run(), Timeline.Mode.PROPAGATOR));
         }
-        StateVector psi = StateVector.basis(3, 0);
+        StateVector psi = StateVector.unit(3, 0);
         runs.put("magnus6 state adaptive", () -> bits(Evolve.of(SMOOTH).over(0, 3).scheme(Scheme.magnus6())
-                .tolerance(1e-9).state(psi).run(), Trajectory.Mode.STATE));
+                .tolerance(1e-9).state(psi).run(), Timeline.Mode.STATE));
         runs.put("weiNorman adaptive", () -> bits(Evolve.of(SMOOTH).over(0, 3).scheme(Scheme.weiNorman(CHART))
-                .tolerance(1e-9).run(), Trajectory.Mode.PROPAGATOR));
+                .tolerance(1e-9).run(), Timeline.Mode.PROPAGATOR));
         runs.put("weiNorman state", () -> bits(Evolve.of(SMOOTH).over(0, 3).scheme(Scheme.weiNorman(CHART))
-                .state(psi).run(), Trajectory.Mode.STATE));
+                .state(psi).run(), Timeline.Mode.STATE));
         Lindbladian l = Lindbladian.builder(SMOOTH).jump(0.2, Operator.unit(3, 0, 1)).build();
         runs.put("open system density", () -> bits(Evolve.of(l).over(0, 2).density(Operator.unit(3, 1, 1))
-                .tolerance(1e-9).run(), Trajectory.Mode.DENSITY));
+                .tolerance(1e-9).run(), Timeline.Mode.DENSITY));
         return runs;
     }
 
@@ -273,7 +273,7 @@ class EvolveHardeningTest {
                 e = mode == 0 ? e.steps(steps) : mode == 1 ? e.tolerance(tol) : e;
                 e = e.maxSteps(maxSteps);
                 if (state) {
-                    e = e.state(StateVector.basis(h.dim(), k0));
+                    e = e.state(StateVector.unit(h.dim(), k0));
                 }
                 return e.run();
             } catch (InvalidInputException refused) {
@@ -289,8 +289,8 @@ class EvolveHardeningTest {
         Status s = ev.status();
         assertTrue(RUN_KINDS.contains(s.kind()), config + ": " + s);
         if (s.isSuccess()) {
-            Bits b = bits(ev, hasState(ev) ? Trajectory.Mode.STATE
-                    : Trajectory.Mode.PROPAGATOR);
+            Bits b = bits(ev, hasState(ev) ? Timeline.Mode.STATE
+                    : Timeline.Mode.PROPAGATOR);
             for (int k = 0; k < b.re().length; k++) {
                 assertTrue(Double.isFinite(b.re()[k]) && Double.isFinite(b.im()[k]), config + ": " + s);
             }

@@ -57,9 +57,9 @@ class EvolveInputTest {
 
     @Test
     void states() {
-        refused(Reason.DIMENSION_MISMATCH, "psi", "dimension 3", () -> e.state(StateVector.basis(3, 0)));
+        refused(Reason.DIMENSION_MISMATCH, "psi", "dimension 3", () -> e.state(StateVector.unit(3, 0)));
         refused(Reason.OUT_OF_RANGE, "psi", "norm 2", () -> e.state(StateVector.real(2, 0)));
-        refused(Reason.UNSUPPORTED, "psi", "state vector", () -> Evolve.of(l).state(StateVector.basis(2, 0)));
+        refused(Reason.UNSUPPORTED, "psi", "state vector", () -> Evolve.of(l).state(StateVector.unit(2, 0)));
     }
 
     @Test

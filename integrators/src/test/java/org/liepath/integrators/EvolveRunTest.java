@@ -82,7 +82,7 @@ class EvolveRunTest {
     @Test
     void fixedStepStateAndDensityRunsEstimate() {
         Hamiltonian h = Fixtures.drivenFour(5);
-        StateVector psi = StateVector.basis(4, 1);
+        StateVector psi = StateVector.unit(4, 1);
         StateVector exact = Evolve.of(h).over(0, 2).scheme(Scheme.magnus8()).steps(4000).state(psi).run().state();
         Evolution ev = Evolve.of(h).over(0, 2).scheme(Scheme.magnus4()).steps(40).state(psi).run();
         double err = ev.state().distance(exact);
@@ -156,7 +156,7 @@ class EvolveRunTest {
                     ev.status().message());
             IllegalStateException ex = assertThrows(IllegalStateException.class, ev::propagator);
             assertTrue(ex.getMessage().contains("DRIVE_FAILED"), ex.getMessage());
-            Trajectory tr = ev.trajectory();
+            Timeline tr = ev.timeline();
             double reached = tr.time(tr.size() - 1);
             assertTrue(reached <= 0.5 && reached == ev.status().time(), "reached " + reached);
             assertTrue(Fixtures.unitarityDefect(tr.propagator(tr.size() - 1)) < 1e-6);
@@ -227,7 +227,7 @@ class EvolveRunTest {
         Evolution ev = Evolve.of(Fixtures.drivenFour(2)).over(0, 1.5).tolerance(1e-7).sampleEveryStep()
                 .observe((t, dt, err) -> times.add(t)).run();
         assertEquals(ev.stats().acceptedSteps(), times.size());
-        assertEquals(times.size() + 1, ev.trajectory().size());
+        assertEquals(times.size() + 1, ev.timeline().size());
         assertEquals(1.5, times.get(times.size() - 1), 0.0);
         // steps land exactly on the window's breakpoints 0.3 and 0.8
         assertTrue(times.contains(0.3) && times.contains(0.8), times.toString());
@@ -259,21 +259,21 @@ class EvolveRunTest {
         Hamiltonian h = Fixtures.drivenFour(8);
         double tol = 1e-11;
         Evolution ev = Evolve.of(h).over(0, 2).tolerance(tol).sampleAt(1.25, 0.5, 2.0, 0.0).run();
-        Trajectory tr = ev.trajectory();
+        Timeline tr = ev.timeline();
         assertArrayEquals(new double[]{0.0, 0.5, 1.25, 2.0}, tr.times());
         Operator half = Evolve.of(h).over(0, 0.5).tolerance(tol).run().propagator();
         assertEquals(0.0, tr.propagator(1).distance(half), 1e-8);
         assertEquals(0.0, tr.propagator(0).distance(Operator.identity(4)), 0.0);
         assertThrows(IllegalStateException.class, () -> tr.state(0));
         // backward runs sample in the order reached
-        Trajectory back = Evolve.of(h).over(2, 0).steps(8).sampleAt(0.5, 1.25).run().trajectory();
+        Timeline back = Evolve.of(h).over(2, 0).steps(8).sampleAt(0.5, 1.25).run().timeline();
         assertArrayEquals(new double[]{2.0, 1.25, 0.5, 0.0}, back.times());
     }
 
     @Test
     void stateModeEqualsPropagatorTimesState() {
         Hamiltonian h = Fixtures.drivenFour(12);
-        StateVector psi = StateVector.basis(4, 2);
+        StateVector psi = StateVector.unit(4, 2);
         Evolve e = Evolve.of(h).over(0, 1.7).steps(60);
         StateVector out = e.state(psi).run().state();
         StateVector viaU = psi.apply(e.run().propagator());
@@ -384,8 +384,8 @@ class EvolveRunTest {
         assertEquals(3, wn.coordinates().last().length);
         assertTrue(wn.stats().charts() >= 1);
         StateVector psi = Evolve.of(h).over(0, 2).scheme(Scheme.weiNorman(chart)).tolerance(1e-11)
-                .state(StateVector.basis(2, 0)).run().state();
-        assertEquals(0.0, psi.distance(StateVector.basis(2, 0).apply(ref)), 1e-8);
+                .state(StateVector.unit(2, 0)).run().state();
+        assertEquals(0.0, psi.distance(StateVector.unit(2, 0).apply(ref)), 1e-8);
         assertThrows(IllegalStateException.class, () -> Evolve.of(h).over(0, 1).run().coordinates());
         Lindbladian l = Lindbladian.builder(h).jump(0.1, Pauli.string("Z")).build();
         EvolveInputTest.refused(org.liepath.core.InvalidInputException.Reason.UNSUPPORTED, "scheme",

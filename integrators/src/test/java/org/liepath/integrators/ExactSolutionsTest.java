@@ -104,9 +104,9 @@ class ExactSolutionsTest {
         // state mode: ψ(t) = U(t)|0⟩ with the closed-form rotating-frame propagator, at the sample times
         double[] times = {1.5, 4, 7.25};
         Evolution ev = Evolve.of(ReferenceProblems.rabi(1, 0.3, 0.9, 10).h()).over(0, 10).scheme(c.get()).tolerance(TOL)
-                .state(org.liepath.core.StateVector.basis(2, 0)).sampleAt(times).run();
+                .state(org.liepath.core.StateVector.unit(2, 0)).sampleAt(times).run();
         assertTrue(ev.status().isSuccess(), () -> c + ": " + ev.status());
-        Trajectory tr = ev.trajectory();
+        Timeline tr = ev.timeline();
         for (double t : times) {
             int k = java.util.Arrays.binarySearch(tr.times(), t);
             assertTrue(k >= 0, c + ": no sample at t = " + t);

@@ -242,7 +242,7 @@ class InteractionPictureTest {
         assertTrue(Exact.sameBits(fluent, Operator.ofPlanar(m, java.util.Arrays.copyOf(u, m * m),
                 java.util.Arrays.copyOfRange(u, m * m, 2 * m * m))), s.name() + " propagator");
 
-        StateVector psi = StateVector.basis(m, 1);
+        StateVector psi = StateVector.unit(m, 1);
         double[] v = new double[2 * m];
         v[1] = 1;
         for (int k = 0; k < n; k++) {
@@ -284,7 +284,7 @@ class InteractionPictureTest {
         Hamiltonian h = driven(71, 64, true, 20.0, 0.3);
         Scheme s = Scheme.magnus4().inInteractionPicture();
         Operator u = run(h, s, 0, 0.5, 12);
-        StateVector psi = StateVector.basis(64, 5);
+        StateVector psi = StateVector.unit(64, 5);
         StateVector out = Evolve.of(h).over(0, 0.5).scheme(s).steps(12).state(psi).run().state();
         double worst = 0;
         for (int i = 0; i < 64; i++) {

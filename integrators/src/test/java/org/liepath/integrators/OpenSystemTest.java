@@ -105,7 +105,7 @@ class OpenSystemTest {
         // same values as opticalBlochTransient, from one run with samples at t = 1 and 2 (steps land on them)
         Evolution ev = Evolve.of(atom(1, 0.5, 1, 0)).over(0, 5).tolerance(TOL).density(GROUND).sampleAt(1, 2).run();
         assertTrue(ev.status().isSuccess(), () -> ev.status().toString());
-        Trajectory tr = ev.trajectory();
+        Timeline tr = ev.timeline();
         double[][] table = {{1, 0.1406423163699099, 0.082392014145719433, -0.3315835562121646},
                 {2, 0.28186689768765842, 0.192940481530519, -0.3583900322055541},
                 {5, 0.25118781368886936, 0.24450753083506668, -0.23899412144258958}};

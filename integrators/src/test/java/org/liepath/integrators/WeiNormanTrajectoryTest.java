@@ -27,7 +27,7 @@ class WeiNormanTrajectoryTest {
         double[] samples = {2.0, 5.0, 9.0, 14.0};
         Evolution wn = Evolve.of(h).over(0, 15).scheme(Scheme.weiNorman(chart)).tolerance(1e-11).sampleAt(samples).run();
         assertTrue(wn.status().isSuccess(), wn.status().toString());
-        Trajectory traj = wn.trajectory();
+        Timeline traj = wn.timeline();
         assertArrayEquals(new double[]{0.0, 2.0, 5.0, 9.0, 14.0, 15.0}, traj.times(), 0.0);
         assertTrue(traj.propagator(0).distance(Operator.identity(2)) == 0.0);
         for (int k = 1; k < traj.size(); k++) {

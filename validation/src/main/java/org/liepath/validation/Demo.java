@@ -13,7 +13,7 @@ import org.liepath.core.internal.Require;
 import org.liepath.integrators.Evolution;
 import org.liepath.integrators.Evolve;
 import org.liepath.integrators.Scheme;
-import org.liepath.integrators.Trajectory;
+import org.liepath.integrators.Timeline;
 import org.liepath.integrators.WeiNorman;
 import org.liepath.validation.internal.TextTable;
 
@@ -314,10 +314,10 @@ public final class Demo {
         for (int k = 0; k < samples; k++) {
             times[k] = T * k / (samples - 1);
         }
-        StateVector psi0 = StateVector.basis(4, 1);    // |01⟩: site A in |0⟩, site B in |1⟩
+        StateVector psi0 = StateVector.unit(4, 1);    // |01⟩: site A in |0⟩, site B in |1⟩
         Evolution pop = Evolve.of(h).over(0, T).tolerance(1e-10).state(psi0).sampleAt(times)
                 .monitor(progress(log, "populations")).run();
-        Trajectory traj = pop.trajectory();
+        Timeline traj = pop.timeline();
         Report.Plot pp = Report.plot("populations.png", "Populations from |01⟩ (closed system)", "t",
                 "population");
         String[] labels = {"|00⟩", "|01⟩", "|10⟩", "|11⟩"};
@@ -347,7 +347,7 @@ public final class Demo {
         fig.put("channel Choi minimum eigenvalue", sci(Checks.choiMinEigenvalue(channel)));
         Evolution dens = Evolve.of(l).over(0, T).tolerance(1e-10).density(psi0.toDensity()).sampleAt(times)
                 .monitor(progress(log, "density")).run();
-        Trajectory dt = dens.trajectory();
+        Timeline dt = dens.timeline();
         double[] purity = Fidelity.purity(dt), entropy = Fidelity.entropy(dt);
         fig.put("final purity", fix(purity[purity.length - 1]));
         fig.put("final entropy", fix(entropy[entropy.length - 1]));

@@ -7,7 +7,7 @@ import org.liepath.core.Operator;
 import org.liepath.core.StateVector;
 import org.liepath.core.Superoperator;
 import org.liepath.core.internal.Require;
-import org.liepath.integrators.Trajectory;
+import org.liepath.integrators.Timeline;
 import org.liepath.validation.internal.HermitianSpectrum;
 
 import java.util.ArrayList;
@@ -211,23 +211,23 @@ public final class Fidelity {
      *
      * @param trajectory the trajectory
      * @return the purity of each sample, in order
-     * @throws IllegalStateException if the trajectory does not hold densities (from {@link Trajectory#density})
+     * @throws IllegalStateException if the trajectory does not hold densities (from {@link Timeline#density})
      */
-    public static double[] purity(Trajectory trajectory) {
+    public static double[] purity(Timeline trajectory) {
         return purity(densities(trajectory));
     }
 
     /**
-     * Entropy of each sample of a density-mode trajectory, as {@link #purity(Trajectory)}.
+     * Entropy of each sample of a density-mode trajectory, as {@link #purity(Timeline)}.
      *
      * @param trajectory the trajectory
      * @return the entropy of each sample, in order
      */
-    public static double[] entropy(Trajectory trajectory) {
+    public static double[] entropy(Timeline trajectory) {
         return entropy(densities(trajectory));
     }
 
-    private static List<Operator> densities(Trajectory trajectory) {
+    private static List<Operator> densities(Timeline trajectory) {
         Require.nonNull(trajectory, "trajectory");
         List<Operator> out = new ArrayList<>(trajectory.size());
         for (int k = 0; k < trajectory.size(); k++) {

@@ -8,7 +8,7 @@ import org.junit.jupiter.params.provider.MethodSource;
 import org.liepath.algebra.LieAlgebra;
 import org.liepath.algebra.PauliAlgebra;
 import org.liepath.algebra.PauliString;
-import org.liepath.algebra.PauliSum;
+import org.liepath.algebra.PauliCombination;
 import org.liepath.algebra.Subalgebras;
 import org.liepath.core.Drive;
 import org.liepath.core.Hamiltonian;
@@ -85,14 +85,14 @@ class BadInputAcrossModulesTest {
                 bad("Operator.kron null", () -> X.kron(null), Reason.NULL, "b", "null"),
                 bad("Operator.fromEjml null", () -> Operator.fromEjml(null), Reason.NULL, "m", "null"),
                 // ---- core: StateVector
-                bad("StateVector.basis index", () -> StateVector.basis(2, 2), Reason.OUT_OF_RANGE, "k", "2"),
+                bad("StateVector.basis index", () -> StateVector.unit(2, 2), Reason.OUT_OF_RANGE, "k", "2"),
                 bad("StateVector.of lengths", () -> StateVector.of(new double[2], new double[3]),
                         Reason.DIMENSION_MISMATCH, "im", "length 3"),
-                bad("StateVector.re index", () -> StateVector.basis(2, 0).re(2), Reason.OUT_OF_RANGE, "i", "2"),
-                bad("StateVector.im index", () -> StateVector.basis(2, 0).im(-1), Reason.OUT_OF_RANGE, "i", "-1"),
-                bad("StateVector.inner dimension", () -> StateVector.basis(2, 0).inner(StateVector.basis(3, 0)),
+                bad("StateVector.re index", () -> StateVector.unit(2, 0).re(2), Reason.OUT_OF_RANGE, "i", "2"),
+                bad("StateVector.im index", () -> StateVector.unit(2, 0).im(-1), Reason.OUT_OF_RANGE, "i", "-1"),
+                bad("StateVector.inner dimension", () -> StateVector.unit(2, 0).inner(StateVector.unit(3, 0)),
                         Reason.DIMENSION_MISMATCH, "b", "3"),
-                bad("StateVector.apply dimension", () -> StateVector.basis(2, 0).apply(I3),
+                bad("StateVector.apply dimension", () -> StateVector.unit(2, 0).apply(I3),
                         Reason.DIMENSION_MISMATCH, "a", "3"),
                 // ---- core: Pauli, Spin, Levels, HilbertSpace, Drive
                 bad("Pauli.string letter", () -> Pauli.string("XQZ"), Reason.SYNTAX, "s", "Q"),
@@ -150,16 +150,16 @@ class BadInputAcrossModulesTest {
                 bad("Subalgebras.closedSubsets empty", () -> Subalgebras.closedSubsets(List.of()), Reason.EMPTY,
                         "basis", "empty"),
                 bad("PauliString.of letter", () -> PauliString.of("XZW"), Reason.SYNTAX, "letters", "W"),
-                bad("PauliSum.parse syntax", () -> PauliSum.parse("0.5 XX + * YY"), Reason.SYNTAX, "text", "*"),
-                bad("PauliSum.parse qubits", () -> PauliSum.parse("XX + YYY"), Reason.DIMENSION_MISMATCH, "text",
+                bad("PauliCombination.parse syntax", () -> PauliCombination.parse("0.5 XX + * YY"), Reason.SYNTAX, "text", "*"),
+                bad("PauliCombination.parse qubits", () -> PauliCombination.parse("XX + YYY"), Reason.DIMENSION_MISMATCH, "text",
                         "YYY"),
-                bad("PauliSum.plus qubits", () -> PauliSum.parse("XX").plus(PauliSum.parse("XXX")),
+                bad("PauliCombination.plus qubits", () -> PauliCombination.parse("XX").plus(PauliCombination.parse("XXX")),
                         Reason.DIMENSION_MISMATCH, "b", "3"),
-                bad("PauliSum.scale NaN", () -> PauliSum.parse("XX").scale(NAN), Reason.NOT_FINITE, "s", "NaN"),
+                bad("PauliCombination.scale NaN", () -> PauliCombination.parse("XX").scale(NAN), Reason.NOT_FINITE, "s", "NaN"),
                 bad("PauliAlgebra.generatedBy empty", () -> PauliAlgebra.generatedBy(List.of()), Reason.EMPTY, "sums",
                         "empty"),
                 bad("PauliAlgebra.generatedBy limit",
-                        () -> PauliAlgebra.generatedBy(List.of(PauliSum.parse("XX"), PauliSum.parse("ZI")), 1),
+                        () -> PauliAlgebra.generatedBy(List.of(PauliCombination.parse("XX"), PauliCombination.parse("ZI")), 1),
                         Reason.LIMIT_EXCEEDED, "maxDimension", "1"),
                 // ---- integrators
                 bad("Evolve.of null Hamiltonian", () -> Evolve.of((Hamiltonian) null), Reason.NULL, "h", "null"),
@@ -170,7 +170,7 @@ class BadInputAcrossModulesTest {
                 bad("Evolve.tolerance", () -> Evolve.of(H2).tolerance(-1), Reason.OUT_OF_RANGE, "tolerance", "-1"),
                 bad("Evolve.steps", () -> Evolve.of(H2).steps(0), Reason.OUT_OF_RANGE, "steps", "0"),
                 bad("Evolve.maxSteps", () -> Evolve.of(H2).maxSteps(0), Reason.OUT_OF_RANGE, "maxSteps", "0"),
-                bad("Evolve.state dimension", () -> Evolve.of(H2).state(StateVector.basis(3, 0)),
+                bad("Evolve.state dimension", () -> Evolve.of(H2).state(StateVector.unit(3, 0)),
                         Reason.DIMENSION_MISMATCH, "psi", "3"),
                 bad("Evolve.density trace", () -> Evolve.of(L2).density(Operator.identity(2)), Reason.OUT_OF_RANGE,
                         "rho0", "2"),

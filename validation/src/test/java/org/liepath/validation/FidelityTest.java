@@ -138,7 +138,7 @@ class FidelityTest {
         Superoperator s = Superoperator.kraus(Channels.randomKraus(r, 2, 2));
         Operator u = Seeds.randomHermitian(r, 2).expMinusI(1.0);
         double h = Math.sqrt(0.5);
-        StateVector[] six = {StateVector.basis(2, 0), StateVector.basis(2, 1), StateVector.real(h, h),
+        StateVector[] six = {StateVector.unit(2, 0), StateVector.unit(2, 1), StateVector.real(h, h),
                 StateVector.real(h, -h), StateVector.of(new double[]{h, 0}, new double[]{0, h}),
                 StateVector.of(new double[]{h, 0}, new double[]{0, -h})};
         double avg = 0;
@@ -198,7 +198,7 @@ class FidelityTest {
         assertEquals(0.38, Fidelity.purity(p), 1e-15);
         assertEquals(-(0.5 * Math.log(0.5) + 0.3 * Math.log(0.3) + 0.2 * Math.log(0.2)), Fidelity.entropy(p), 1e-14);
         assertEquals(0, Fidelity.entropy(StateVector.real(0.6, 0.8).toDensity()), 1e-12);
-        double[] traj = Fidelity.purity(List.of(mixed, StateVector.basis(4, 1).toDensity()));
+        double[] traj = Fidelity.purity(List.of(mixed, StateVector.unit(4, 1).toDensity()));
         assertEquals(0.25, traj[0], 1e-15);
         assertEquals(1.0, traj[1], 1e-15);
         assertEquals(2, Fidelity.entropy(List.of(mixed, mixed)).length);
@@ -240,7 +240,7 @@ class FidelityTest {
                 .builder(org.liepath.core.Hamiltonian.constant(Operator.zero(2))).jump(gamma, Operator.unit(2, 0, 1)).build();
         double[] times = {0, 0.5, 1, 2, 3};
         var traj = org.liepath.integrators.Evolve.of(l).over(0, 3).tolerance(1e-12)
-                .density(Operator.unit(2, 1, 1)).sampleAt(times).run().trajectory();
+                .density(Operator.unit(2, 1, 1)).sampleAt(times).run().timeline();
         double[] pur = Fidelity.purity(traj), ent = Fidelity.entropy(traj);
         assertEquals(times.length, pur.length);
         for (int k = 0; k < times.length; k++) {
@@ -287,6 +287,6 @@ class FidelityTest {
         InvalidInputException nh = assertThrows(InvalidInputException.class,
                 () -> Fidelity.entropy(Operator.unit(2, 0, 1)));
         assertEquals(InvalidInputException.Reason.NOT_HERMITIAN, nh.reason());
-        assertThrows(InvalidInputException.class, () -> Fidelity.state(StateVector.basis(2, 0), StateVector.basis(3, 0)));
+        assertThrows(InvalidInputException.class, () -> Fidelity.state(StateVector.unit(2, 0), StateVector.unit(3, 0)));
     }
 }

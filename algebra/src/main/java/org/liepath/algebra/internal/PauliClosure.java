@@ -261,7 +261,7 @@ public final class PauliClosure {
             return new Object[]{Arrays.copyOf(ids, m), Arrays.copyOf(c, m)};
         }
 
-        /** −i[A_i, A_j] for accepted elements i and j, in the Hermitian-coefficient convention (see PauliSum). */
+        /** −i[A_i, A_j] for accepted elements i and j, in the Hermitian-coefficient convention (see PauliCombination). */
         private void bracket(int i, int j) {
             int[] ai = accIds.get(i), aj = accIds.get(j);
             double[] ci = accCoefs.get(i), cj = accCoefs.get(j);

@@ -12,38 +12,38 @@ import java.util.Random;
 
 import static org.junit.jupiter.api.Assertions.*;
 
-class PauliSumTest {
+class PauliCombinationTest {
 
-    static PauliSum randomSum(Random r, int n, int terms) {
-        PauliSum s = PauliSum.zero(n);
+    static PauliCombination randomSum(Random r, int n, int terms) {
+        PauliCombination s = PauliCombination.zero(n);
         for (int k = 0; k < terms; k++) {
-            s = s.plus(PauliSum.of(r.nextGaussian(), PauliString.of(PauliStringTest.randomLetters(r, n))));
+            s = s.plus(PauliCombination.of(r.nextGaussian(), PauliString.of(PauliStringTest.randomLetters(r, n))));
         }
         return s;
     }
 
     @Test
     void parsesTheDocumentedForms() {
-        PauliSum s = PauliSum.parse("0.5 XXI + YYI - 2 ZII");
+        PauliCombination s = PauliCombination.parse("0.5 XXI + YYI - 2 ZII");
         assertEquals(3, s.size());
         assertEquals(0.5, s.coefficient(PauliString.of("XXI")));
         assertEquals(1.0, s.coefficient(PauliString.of("YYI")));
         assertEquals(-2.0, s.coefficient(PauliString.of("ZII")));
         assertEquals(0.0, s.coefficient(PauliString.of("ZZZ")));
-        PauliSum t = PauliSum.parse("  -1e-3*xz+.5 ZZ −2.5E+1 * IX + XZ ");
+        PauliCombination t = PauliCombination.parse("  -1e-3*xz+.5 ZZ −2.5E+1 * IX + XZ ");
         assertEquals(1 - 1e-3, t.coefficient(PauliString.of("XZ")));
         assertEquals(0.5, t.coefficient(PauliString.of("ZZ")));
         assertEquals(-25.0, t.coefficient(PauliString.of("IX")));
-        assertEquals(PauliSum.parse("2XY"), PauliSum.parse("XY + XY"));
-        assertTrue(PauliSum.parse("XY - XY").isZero());
-        assertEquals(2, PauliSum.parse("XY - XY").qubits());
+        assertEquals(PauliCombination.parse("2XY"), PauliCombination.parse("XY + XY"));
+        assertTrue(PauliCombination.parse("XY - XY").isZero());
+        assertEquals(2, PauliCombination.parse("XY - XY").qubits());
         // the contract's expression
-        PauliSum c = PauliSum.parse("0.5 XXI + YYI - 2 ZII").plus(PauliSum.parse("ZZZ")).scale(2.0);
+        PauliCombination c = PauliCombination.parse("0.5 XXI + YYI - 2 ZII").plus(PauliCombination.parse("ZZZ")).scale(2.0);
         assertEquals(Map.of(PauliString.of("XXI"), 1.0, PauliString.of("YYI"), 2.0, PauliString.of("ZII"), -4.0,
                 PauliString.of("ZZZ"), 2.0), c.terms());
         assertEquals("XXI + 2 YYI - 4 ZII + 2 ZZZ", c.toString());
-        assertEquals("0 III", PauliSum.zero(3).toString());
-        assertEquals(PauliSum.zero(3), PauliSum.parse("0 III"));
+        assertEquals("0 III", PauliCombination.zero(3).toString());
+        assertEquals(PauliCombination.zero(3), PauliCombination.parse("0 III"));
     }
 
     @ParameterizedTest(name = "seed {0}")
@@ -51,7 +51,7 @@ class PauliSumTest {
     void toStringRoundTrips(long seed) {
         Random r = new Random(seed);
         int n = 1 + r.nextInt(r.nextBoolean() ? 5 : 90);
-        PauliSum s = PauliSum.zero(n);
+        PauliCombination s = PauliCombination.zero(n);
         for (int k = r.nextInt(6); k >= 0; k--) {
             double c;
             switch (r.nextInt(4)) {
@@ -63,9 +63,9 @@ class PauliSumTest {
             if (!Double.isFinite(c)) {
                 c = 1.5;
             }
-            s = s.plus(PauliSum.of(c, PauliString.of(PauliStringTest.randomLetters(r, n))));
+            s = s.plus(PauliCombination.of(c, PauliString.of(PauliStringTest.randomLetters(r, n))));
         }
-        assertEquals(s, PauliSum.parse(s.toString()), s.toString());
+        assertEquals(s, PauliCombination.parse(s.toString()), s.toString());
     }
 
     // Fuzzing: random texts over the grammar's alphabet (and some noise) either parse or throw
@@ -83,8 +83,8 @@ class PauliSumTest {
             }
             String text = b.toString();
             try {
-                PauliSum s = PauliSum.parse(text);
-                assertEquals(s, PauliSum.parse(s.toString()), text);
+                PauliCombination s = PauliCombination.parse(text);
+                assertEquals(s, PauliCombination.parse(s.toString()), text);
             } catch (InvalidInputException e) {
                 assertNotNull(e.reason());
                 assertTrue(e.getMessage().startsWith("text:") || e.getMessage().startsWith("letters:"),
@@ -103,18 +103,18 @@ class PauliSumTest {
         assertSyntax("2 * * XX", "'*' at position 4");
         assertSyntax("XX + 1.2.3 YY", "'.' at position 8");
         assertSyntax("NaN XX", "'N' at position 0");
-        InvalidInputException e = assertThrows(InvalidInputException.class, () -> PauliSum.parse("XX + 1e999 YY"));
+        InvalidInputException e = assertThrows(InvalidInputException.class, () -> PauliCombination.parse("XX + 1e999 YY"));
         assertEquals(Reason.NOT_FINITE, e.reason());
         assertTrue(e.getMessage().contains("1e999 at position 5"), e.getMessage());
-        e = assertThrows(InvalidInputException.class, () -> PauliSum.parse("0.5 XXI + YY - 2 ZII"));
+        e = assertThrows(InvalidInputException.class, () -> PauliCombination.parse("0.5 XXI + YY - 2 ZII"));
         assertEquals(Reason.DIMENSION_MISMATCH, e.reason());
         assertTrue(e.getMessage().contains("\"YY\" of 2 letters at position 10"), e.getMessage());
-        assertEquals(Reason.EMPTY, assertThrows(InvalidInputException.class, () -> PauliSum.parse("  ")).reason());
-        assertEquals(Reason.NULL, assertThrows(InvalidInputException.class, () -> PauliSum.parse(null)).reason());
+        assertEquals(Reason.EMPTY, assertThrows(InvalidInputException.class, () -> PauliCombination.parse("  ")).reason());
+        assertEquals(Reason.NULL, assertThrows(InvalidInputException.class, () -> PauliCombination.parse(null)).reason());
     }
 
     private static void assertSyntax(String text, String where) {
-        InvalidInputException e = assertThrows(InvalidInputException.class, () -> PauliSum.parse(text));
+        InvalidInputException e = assertThrows(InvalidInputException.class, () -> PauliCombination.parse(text));
         assertEquals(Reason.SYNTAX, e.reason(), e.getMessage());
         assertEquals("text", e.argument());
         assertTrue(e.getMessage().contains(where), e.getMessage());
@@ -124,24 +124,24 @@ class PauliSumTest {
     @Test
     void badCoefficientsAndSizes() {
         InvalidInputException e = assertThrows(InvalidInputException.class,
-                () -> PauliSum.of(Double.NaN, PauliString.of("XY")));
+                () -> PauliCombination.of(Double.NaN, PauliString.of("XY")));
         assertEquals(Reason.NOT_FINITE, e.reason());
         assertTrue(e.getMessage().contains("NaN"), e.getMessage());
-        e = assertThrows(InvalidInputException.class, () -> PauliSum.of("XY").scale(Double.POSITIVE_INFINITY));
+        e = assertThrows(InvalidInputException.class, () -> PauliCombination.of("XY").scale(Double.POSITIVE_INFINITY));
         assertEquals(Reason.NOT_FINITE, e.reason());
-        e = assertThrows(InvalidInputException.class, () -> PauliSum.of(1e300, PauliString.of("XY")).scale(1e300));
+        e = assertThrows(InvalidInputException.class, () -> PauliCombination.of(1e300, PauliString.of("XY")).scale(1e300));
         assertEquals(Reason.NOT_FINITE, e.reason());
-        e = assertThrows(InvalidInputException.class, () -> PauliSum.of(Map.of(PauliString.of("X"), Double.NaN)));
+        e = assertThrows(InvalidInputException.class, () -> PauliCombination.of(Map.of(PauliString.of("X"), Double.NaN)));
         assertEquals(Reason.NOT_FINITE, e.reason());
         e = assertThrows(InvalidInputException.class,
-                () -> PauliSum.of(Map.of(PauliString.of("X"), 1.0, PauliString.of("XY"), 2.0)));
+                () -> PauliCombination.of(Map.of(PauliString.of("X"), 1.0, PauliString.of("XY"), 2.0)));
         assertEquals(Reason.DIMENSION_MISMATCH, e.reason());
-        e = assertThrows(InvalidInputException.class, () -> PauliSum.of("XY").plus(PauliSum.of("XYZ")));
+        e = assertThrows(InvalidInputException.class, () -> PauliCombination.of("XY").plus(PauliCombination.of("XYZ")));
         assertEquals(Reason.DIMENSION_MISMATCH, e.reason());
         assertTrue(e.getMessage().contains("3 qubits"), e.getMessage());
-        assertEquals(Reason.EMPTY, assertThrows(InvalidInputException.class, () -> PauliSum.of(Map.of())).reason());
+        assertEquals(Reason.EMPTY, assertThrows(InvalidInputException.class, () -> PauliCombination.of(Map.of())).reason());
         assertEquals(Reason.LIMIT_EXCEEDED,
-                assertThrows(InvalidInputException.class, () -> PauliSum.of("X".repeat(13)).toOperator()).reason());
+                assertThrows(InvalidInputException.class, () -> PauliCombination.of("X".repeat(13)).toOperator()).reason());
     }
 
     // The bracket convention against dense matrices: C = −i[A, B] with [A, B] = AB − BA computed by dense
@@ -151,7 +151,7 @@ class PauliSumTest {
     void commutatorMatchesDense(long seed) {
         Random r = new Random(seed);
         int n = 1 + r.nextInt(4);
-        PauliSum a = randomSum(r, n, 1 + r.nextInt(5)), b = randomSum(r, n, 1 + r.nextInt(5));
+        PauliCombination a = randomSum(r, n, 1 + r.nextInt(5)), b = randomSum(r, n, 1 + r.nextInt(5));
         Operator dense = a.toOperator().commutator(b.toOperator()).timesI().scale(-1.0);
         // entries are sums of at most 25 products of O(1) Gaussians: 1e-13 covers the rounding
         assertEquals(0, a.commutator(b).toOperator().distance(dense), 1e-13);

@@ -33,12 +33,12 @@ import java.util.Map;
  *
  * <p>Thread-safety: immutable.
  */
-public final class PauliSum {
+public final class PauliCombination {
     private final int qubits;
     private final PauliString[] strings;
     private final double[] coefs;
 
-    private PauliSum(int qubits, PauliString[] strings, double[] coefs) {
+    private PauliCombination(int qubits, PauliString[] strings, double[] coefs) {
         this.qubits = qubits;
         this.strings = strings;
         this.coefs = coefs;
@@ -55,7 +55,7 @@ public final class PauliSum {
      *                               NOT_FINITE for a coefficient that overflows a double; DIMENSION_MISMATCH if
      *                               strings of different lengths appear (naming the first offender)
      */
-    public static PauliSum parse(String text) {
+    public static PauliCombination parse(String text) {
         Require.nonNull(text, "text");
         List<SumSyntax.Term> terms = SumSyntax.parse(text);
         int q = terms.get(0).letters.length();
@@ -77,7 +77,7 @@ public final class PauliSum {
      * @param p the Pauli string
      * @return the sum 1·P
      */
-    public static PauliSum of(PauliString p) {
+    public static PauliCombination of(PauliString p) {
         return of(1.0, p);
     }
 
@@ -87,15 +87,15 @@ public final class PauliSum {
      * @return the sum c·P
      * @throws InvalidInputException for a null string or a non-finite coefficient
      */
-    public static PauliSum of(double c, PauliString p) {
+    public static PauliCombination of(double c, PauliString p) {
         Require.nonNull(p, "p");
         Require.finite(c, "c");
-        return c == 0 ? zero(p.qubits()) : new PauliSum(p.qubits(), new PauliString[]{p}, new double[]{c});
+        return c == 0 ? zero(p.qubits()) : new PauliCombination(p.qubits(), new PauliString[]{p}, new double[]{c});
     }
 
     /** 1·P for a string known to be non-null (no checks): the basis elements of string algebras. */
-    static PauliSum unit(PauliString p) {
-        return new PauliSum(p.qubits(), new PauliString[]{p}, UNIT_COEFFICIENT);
+    static PauliCombination unit(PauliString p) {
+        return new PauliCombination(p.qubits(), new PauliString[]{p}, UNIT_COEFFICIENT);
     }
 
     /** Shared by every {@link #unit} sum: coefficient arrays are never written after construction. */
@@ -105,7 +105,7 @@ public final class PauliSum {
      * @param p the Pauli letters of the string (coefficient 1)
      * @return the sum 1·P for the letters of {@code p}, e.g. {@code of("XZI")}
      */
-    public static PauliSum of(String p) {
+    public static PauliCombination of(String p) {
         return of(PauliString.of(p));
     }
 
@@ -117,7 +117,7 @@ public final class PauliSum {
      * @throws InvalidInputException EMPTY for an empty map, NULL for a null key or value, NOT_FINITE for a NaN or
      *                               infinite coefficient, DIMENSION_MISMATCH for strings of different lengths
      */
-    public static PauliSum of(Map<PauliString, Double> terms) {
+    public static PauliCombination of(Map<PauliString, Double> terms) {
         Require.nonNull(terms, "terms");
         if (terms.isEmpty()) {
             throw InvalidInputException.of(Reason.EMPTY, "terms", "at least one term (use zero(qubits) for 0)", "{}");
@@ -145,13 +145,13 @@ public final class PauliSum {
      * @param qubits the number of qubits
      * @return the zero sum on {@code qubits} qubits
      */
-    public static PauliSum zero(int qubits) {
+    public static PauliCombination zero(int qubits) {
         Require.positive(qubits, "qubits");
-        return new PauliSum(qubits, new PauliString[0], new double[0]);
+        return new PauliCombination(qubits, new PauliString[0], new double[0]);
     }
 
     /** Builds from a map whose keys have {@code q} qubits and finite values; drops exact zeros and sorts. */
-    static PauliSum fromMap(int q, Map<PauliString, Double> acc) {
+    static PauliCombination fromMap(int q, Map<PauliString, Double> acc) {
         PauliString[] keys = new PauliString[acc.size()];
         int m = 0;
         for (Map.Entry<PauliString, Double> e : acc.entrySet()) {
@@ -169,7 +169,7 @@ public final class PauliSum {
                         c[k] + " on " + keys[k]);
             }
         }
-        return new PauliSum(q, keys, c);
+        return new PauliCombination(q, keys, c);
     }
 
     // ------------------------------------------------------------------ access
@@ -250,7 +250,7 @@ public final class PauliSum {
      * @param b the other sum
      * @return this + b (exactly cancelling terms vanish)
      */
-    public PauliSum plus(PauliSum b) {
+    public PauliCombination plus(PauliCombination b) {
         return combine(b, 1.0, "b");
     }
 
@@ -258,11 +258,11 @@ public final class PauliSum {
      * @param b the other sum
      * @return this − b
      */
-    public PauliSum minus(PauliSum b) {
+    public PauliCombination minus(PauliCombination b) {
         return combine(b, -1.0, "b");
     }
 
-    private PauliSum combine(PauliSum b, double sb, String name) {
+    private PauliCombination combine(PauliCombination b, double sb, String name) {
         requireSame(b, name);
         PauliString[] ks = new PauliString[strings.length + b.strings.length];
         double[] cs = new double[ks.length];
@@ -290,7 +290,7 @@ public final class PauliSum {
                 cs[m++] = c;
             }
         }
-        return new PauliSum(qubits, Arrays.copyOf(ks, m), Arrays.copyOf(cs, m));
+        return new PauliCombination(qubits, Arrays.copyOf(ks, m), Arrays.copyOf(cs, m));
     }
 
     /**
@@ -298,7 +298,7 @@ public final class PauliSum {
      * @return s·this
      * @throws InvalidInputException for a non-finite factor or an overflowing product
      */
-    public PauliSum scale(double s) {
+    public PauliCombination scale(double s) {
         Require.finite(s, "s");
         if (s == 0) {
             return zero(qubits);
@@ -311,7 +311,7 @@ public final class PauliSum {
                         s + " (times " + coefs[k] + " on " + strings[k] + ")");
             }
         }
-        return new PauliSum(qubits, strings, c);
+        return new PauliCombination(qubits, strings, c);
     }
 
     /**
@@ -322,7 +322,7 @@ public final class PauliSum {
      * @param b the other sum
      * @return the bracket in the convention of dynamical Lie algebras
      */
-    public PauliSum commutator(PauliSum b) {
+    public PauliCombination commutator(PauliCombination b) {
         requireSame(b, "b");
         Map<PauliString, Double> acc = new HashMap<>();
         for (int i = 0; i < strings.length; i++) {
@@ -341,7 +341,7 @@ public final class PauliSum {
         return fromMap(qubits, acc);
     }
 
-    private void requireSame(PauliSum b, String name) {
+    private void requireSame(PauliCombination b, String name) {
         Require.nonNull(b, name);
         if (b.qubits != qubits) {
             throw InvalidInputException.of(Reason.DIMENSION_MISMATCH, name, "a Pauli sum on " + qubits + " qubits",
@@ -402,10 +402,10 @@ public final class PauliSum {
         if (this == o) {
             return true;
         }
-        if (!(o instanceof PauliSum)) {
+        if (!(o instanceof PauliCombination)) {
             return false;
         }
-        PauliSum s = (PauliSum) o;
+        PauliCombination s = (PauliCombination) o;
         return s.qubits == qubits && Arrays.equals(s.strings, strings) && Arrays.equals(s.coefs, coefs);
     }
 

@@ -20,7 +20,7 @@ import java.util.List;
  *
  * <p>Immutable and thread-safe.
  */
-public final class Trajectory {
+public final class Timeline {
     enum Mode { PROPAGATOR, STATE, DENSITY, CHANNEL }
 
     private final Mode mode;
@@ -28,7 +28,7 @@ public final class Trajectory {
     private final double[] times;
     private final List<double[]> re, im;
 
-    Trajectory(Mode mode, int n, List<Double> times, List<double[]> re, List<double[]> im) {
+    Timeline(Mode mode, int n, List<Double> times, List<double[]> re, List<double[]> im) {
         this.mode = mode;
         this.n = n;
         this.times = new double[times.size()];
@@ -127,7 +127,7 @@ public final class Trajectory {
 
     @Override
     public String toString() {
-        return "Trajectory of " + times.length + " " + mode.name().toLowerCase() + " samples";
+        return "Timeline of " + times.length + " " + mode.name().toLowerCase() + " samples";
     }
 
 }
